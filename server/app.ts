@@ -1,0 +1,68 @@
+import path from 'node:path';
+import express from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config/env';
+import { authRouter } from './features/auth/auth.router';
+import { originCheck } from './features/auth/origin-check';
+import { sessionMiddleware } from './features/auth/session';
+import { healthRouter } from './features/health/health.router';
+import { apiNotFound, errorHandler } from './lib/error-handler';
+import type { Logger } from './lib/logger';
+import type { Mailer } from './lib/mailer';
+
+export interface AppDeps {
+  sequelize: Sequelize;
+  config: Config;
+  mailer: Mailer;
+  logger: Logger;
+  /** Folder of the built client; when absent (tests, `npm run dev`) only the API is served. */
+  clientDir?: string;
+}
+
+/** Builds the Express app without listening, so tests drive it directly with supertest. */
+export function createApp(deps: AppDeps) {
+  const { sequelize, config, logger } = deps;
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+        },
+      },
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use('/health', healthRouter(sequelize));
+  api.use(sessionMiddleware(sequelize, config).handlers);
+  api.use(originCheck(config.appUrl));
+  api.use('/auth', authRouter());
+  // Feature routers are mounted here, one line each.
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (deps.clientDir) {
+    const clientDir = deps.clientDir;
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+  }
+  app.use(errorHandler);
+  return app;
+}

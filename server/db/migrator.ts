@@ -1,0 +1,32 @@
+import type { QueryInterface, Sequelize } from 'sequelize';
+import { SequelizeStorage, Umzug } from 'umzug';
+import * as m0001 from './migrations/0001-core';
+
+export type Migration = {
+  up: (ctx: { context: QueryInterface }) => Promise<void>;
+  down: (ctx: { context: QueryInterface }) => Promise<void>;
+};
+
+/** Listed here rather than globbed, so the same list works under tsx, vitest and a bundled build. */
+const migrations: Record<string, Migration> = {
+  '0001-core': m0001,
+};
+
+export function createMigrator(sequelize: Sequelize) {
+  return new Umzug({
+    migrations: Object.entries(migrations).map(([name, m]) => ({ name, up: m.up, down: m.down })),
+    context: sequelize.getQueryInterface(),
+    storage: new SequelizeStorage({ sequelize, tableName: 'migrations' }),
+    logger: undefined,
+  });
+}
+
+export async function migrate(sequelize: Sequelize): Promise<void> {
+  // Foreign keys are switched off while tables are rebuilt, as SQLite requires for ALTER via copy.
+  await sequelize.query('PRAGMA foreign_keys = OFF;');
+  try {
+    await createMigrator(sequelize).up();
+  } finally {
+    await sequelize.query('PRAGMA foreign_keys = ON;');
+  }
+}

@@ -1,0 +1,13 @@
+import type { Sequelize } from 'sequelize';
+import { Session } from '../features/auth/session.model';
+import { User } from '../features/auth/user.model';
+import { initClassModels } from '../features/classes/class.model';
+import { initCourseModels } from '../features/courses/course.model';
+
+/** Every model is initialised here, once per Sequelize instance; each feature registers its own in one line. */
+export function initModels(sequelize: Sequelize) {
+  User.initModel(sequelize);
+  Session.initModel(sequelize);
+  initCourseModels(sequelize);
+  initClassModels(sequelize);
+}

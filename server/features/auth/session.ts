@@ -1,0 +1,59 @@
+import connectSessionSequelize from 'connect-session-sequelize';
+import session from 'express-session';
+import passport from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
+import type { Sequelize } from 'sequelize';
+import type { Config } from '../../config/env';
+import { findActiveUser, verifyCredentials } from './auth.service';
+
+const SequelizeStore = connectSessionSequelize(session.Store);
+const TWO_WEEKS_MS = 14 * 24 * 3600 * 1000;
+
+/** express-session stored in SQLite plus passport-local; returns the middleware in the order they must run. */
+export function sessionMiddleware(sequelize: Sequelize, config: Config) {
+  const store = new SequelizeStore({
+    db: sequelize,
+    table: 'Session',
+    checkExpirationInterval: 15 * 60 * 1000,
+    expiration: TWO_WEEKS_MS,
+    // The user id is kept in its own column so that a user's sessions can be ended together.
+    extendDefaultFields: (defaults: Record<string, unknown>, sess: { passport?: { user?: number } }) => ({
+      data: defaults.data,
+      expires: defaults.expires,
+      userId: sess.passport?.user ?? null,
+    }),
+  });
+
+  passport.use(
+    new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
+      verifyCredentials(email, password).then((user) => done(null, user ?? false), done);
+    }),
+  );
+  passport.serializeUser<number>((user, done) => done(null, user.id));
+  // A deactivated or deleted account simply has no user any more: its open sessions stop working at once.
+  passport.deserializeUser<number>((id, done) => {
+    findActiveUser(id).then((user) => done(null, user ?? false), done);
+  });
+
+  return {
+    store,
+    handlers: [
+      session({
+        name: 'tickwright.sid',
+        secret: config.sessionSecret,
+        store,
+        resave: false,
+        saveUninitialized: false,
+        rolling: true,
+        proxy: true,
+        cookie: {
+          httpOnly: true,
+          sameSite: 'lax',
+          secure: config.appUrl.startsWith('https://'),
+          maxAge: TWO_WEEKS_MS,
+        },
+      }),
+      passport.session(),
+    ],
+  };
+}

@@ -1,0 +1,402 @@
+import { z } from 'zod';
+import type { Calculator, CalcOutput, CalcStep } from './types';
+
+const SHEFFIELD = 'Sheffield Gauge Plate chart (https://sheffieldgaugeplate.co.uk/blog/steel-temper-colour-chart/)';
+const EASTERN = 'Eastern Tool Steel O-1 data sheet (easterntoolsteel.com/data/0-1_1.htm)';
+const NOONS = 'noonsknives.blogspot.com "AISI 1095" (maker\'s blog, weak)';
+const PRECISION = 'Precision Steel Warehouse, "Temper designations of wrought copper-base alloys"';
+const OLIN = 'olinbrass.com "C26000 (ASTM B36) Cartridge Brass"';
+// Each B&S gauge number is this ratio in thickness: 40 sizes span a 92:1 range.
+const BS_GAUGE_RATIO = Math.pow(92, 1 / 39);
+
+export interface TemperBand {
+  name: string;
+  tempC: number;
+  tempF: number;
+  /** Swatch colour chosen to look like the oxide film, for display only. */
+  hex: string;
+  note: string | null;
+}
+const band = (name: string, tempC: number, tempF: number, hex: string, note: string | null = null): TemperBand => ({
+  name,
+  tempC,
+  tempF,
+  hex,
+  note,
+});
+// One chart only: published charts disagree by up to about 20 °C.
+const TEMPER_COLOURS: readonly TemperBand[] = [
+  band('Light yellow', 210, 410, '#eee0a4'),
+  band('Straw', 220, 430, '#e2c473'),
+  band('Yellow', 230, 450, '#d6ad4b'),
+  band('Dark yellow', 240, 460, '#c49634'),
+  band('Yellow brown', 250, 480, '#a97636'),
+  band('Red brown', 260, 500, '#8c4c2f'),
+  band('Purple', 270, 520, '#6b3a5d'),
+  band('Violet', 280, 530, '#56397b'),
+  band('Dark blue', 290, 550, '#253d79'),
+  band('Wedgwood blue', 300, 570, '#4b6fa3'),
+  band('Light blue', 310, 590, '#6f9bc2', 'springs'),
+  band('Grey blue', 320, 610, '#7b8ea2'),
+  band('Grey green', 330, 630, '#7e8e84'),
+];
+// Half the 10 °C band spacing: beyond this past either end of the chart no colour is claimed.
+const CHART_MARGIN_C = 5;
+
+export interface HardnessPoint {
+  tempC: number;
+  hrc: number;
+}
+const points = (table: Record<number, number>): HardnessPoint[] =>
+  Object.entries(table).map(([tempC, hrc]) => ({ tempC: Number(tempC), hrc }));
+// The blog gives 1095 as one-point ranges (63–64 HRC); the midpoint of each range is stored.
+const CURVES = {
+  O1: {
+    source: EASTERN,
+    points: points({ 150: 64, 175: 63, 205: 62, 230: 61, 260: 59, 315: 56, 370: 52, 425: 49, 480: 44, 540: 40 }),
+  },
+  '1095': {
+    source: NOONS,
+    points: points({ 149: 65, 177: 63.5, 204: 62.5, 232: 61.5, 260: 59.5, 288: 57.5, 316: 55.5, 343: 53.5 }),
+  },
+  silver: null,
+} as const;
+
+const HARDENING = {
+  O1: {
+    temperatureC: { min: 790, max: 815 },
+    quench: 'oil, down to about 65 °C (150 °F)',
+    asQuenchedHrc: 65,
+    source: EASTERN,
+  },
+  '1095': {
+    temperatureC: { min: 790, max: 815 },
+    quench: 'fast oil; water or brine only with care, on thick sections',
+    asQuenchedHrc: null,
+    source: `${NOONS}, 800 °C (1475 °F); range 790–815 °C from truekatana.com (weak)`,
+  },
+  silver: {
+    temperatureC: { min: 770, max: 780 },
+    quench: 'water; up to 8 mm (5/16 in) may be oil-hardened from 800–810 °C',
+    asQuenchedHrc: null,
+    source: 'glue-it.com "Heat treating silver steel"',
+  },
+} as const;
+type Hardening = (typeof HARDENING)[keyof typeof HARDENING];
+
+const temper = (
+  name: string,
+  numbersHard: number,
+  published: number | null,
+  [tMinKsi, tMaxKsi, tMinMPa, tMaxMPa, yKsi, yMPa]: [number, number, number, number, number, number],
+  elongationPercent: number | null,
+  note: string | null = null,
+) => ({
+  name,
+  numbersHard,
+  publishedReductionPercent: published,
+  strength: {
+    tensileKsi: { min: tMinKsi, max: tMaxKsi },
+    tensileMPa: { min: tMinMPa, max: tMaxMPa },
+    yieldKsi: yKsi,
+    yieldMPa: yMPa,
+    elongationPercent,
+    note,
+    source: OLIN,
+  },
+});
+type BrassTemper = ReturnType<typeof temper>;
+type Strength = BrassTemper['strength'];
+const EXTRA_SPRING_NOTE =
+  "The page's 755 MPa upper limit does not match its 104 ksi (about 717 MPa); no elongation is given.";
+// Reductions as published (rounded); strengths for C26000 strip as published, including the page's odd 755 MPa.
+const BRASS_TEMPERS: readonly BrassTemper[] = [
+  temper('annealed', 0, null, [45, 61, 310, 420, 21, 145], 53),
+  temper('¼ hard', 1, 10.9, [49, 59, 340, 405, 33, 230], 46),
+  temper('½ hard', 2, 20.7, [57, 67, 395, 460, 51, 350], 30),
+  temper('¾ hard', 3, 29.4, [64, 74, 440, 510, 62, 425], 16),
+  temper('hard', 4, 37.1, [71, 81, 490, 560, 72, 495], 10),
+  temper('extra hard', 6, 50.0, [83, 92, 570, 635, 83, 570], 3),
+  temper('spring', 8, 60.5, [91, 100, 625, 690, 86, 595], 1, 'Elongation 1 % is a minimum.'),
+  temper('extra spring', 10, 68.7, [95, 104, 655, 755, 89, 615], null, EXTRA_SPRING_NOTE),
+];
+
+export interface ClickSpringMaterial {
+  id: string;
+  label: string;
+  youngsModulusGPa: number;
+  yieldStrengthMPa: number | null;
+  source: string;
+}
+const material = (
+  id: string,
+  label: string,
+  youngsModulusGPa: number,
+  yieldStrengthMPa: number | null,
+  source: string,
+): ClickSpringMaterial => ({ id, label, youngsModulusGPa, yieldStrengthMPa, source });
+const slug = (name: string) =>
+  name.replace('¼', 'quarter').replace('½', 'half').replace('¾', 'three-quarter').replace(/ /g, '-');
+export const CLICK_SPRING_MATERIALS: readonly ClickSpringMaterial[] = [
+  material('spring-steel', 'Spring steel', 206, null, 'Tokai Bane "Flat springs formulas", Table 2'),
+  ...BRASS_TEMPERS.map((t) =>
+    material(
+      `c26000-${slug(t.name)}`,
+      `C26000 cartridge brass, ${t.name}`,
+      110,
+      t.strength.yieldMPa,
+      `modulus: makeitfrom.com; yield: ${OLIN}`,
+    ),
+  ),
+  material('leaded-brass', 'Leaded brass C38500', 100, null, 'makeitfrom.com (M20 temper)'),
+];
+
+const SteelInput = z.object({
+  mode: z.literal('steel'),
+  steel: z.enum(['O1', '1095', 'silver']).default('O1'),
+  temperatureC: z.number().min(0).max(1200).optional(),
+  colour: z.string().max(60).optional(),
+});
+const BrassInput = z.object({
+  mode: z.literal('brass'),
+  numbersHard: z.number().int().min(0).max(20),
+});
+const ClickSpringInput = z.object({
+  mode: z.literal('click-spring'),
+  widthMm: z.number().positive().min(0.01).max(100),
+  thicknessMm: z.number().positive().min(0.01).max(10),
+  lengthMm: z.number().positive().min(0.1).max(1000),
+  deflectionMm: z.number().positive().max(1000),
+  youngsModulusGPa: z.number().positive().min(1).max(500).default(206),
+  yieldStrengthMPa: z.number().positive().min(1).max(5000).optional(),
+});
+export const SpringTemperInput = z.discriminatedUnion('mode', [SteelInput, BrassInput, ClickSpringInput]);
+export type SpringTemperInput = z.input<typeof SpringTemperInput>;
+
+interface SteelResults {
+  mode: 'steel';
+  steel: 'O1' | '1095' | 'silver';
+  hardening: Hardening;
+  colourForTemperature: TemperBand | null;
+  temperatureForColour: TemperBand | null;
+  temperColours: TemperBand[];
+  hardnessCurve: HardnessPoint[];
+  hardnessCurveSource: string | null;
+  hardnessAtTemperatureHrc: number | null;
+}
+interface BrassResults {
+  mode: 'brass';
+  reductionPercent: number;
+  temperName: string;
+  publishedReductionPercent: number | null;
+  strength: Strength;
+}
+interface ClickSpringResults {
+  mode: 'click-spring';
+  forceN: number;
+  stressMPa: number;
+  stiffnessNPerMm: number;
+  stressToYield: number | null;
+}
+export type SpringTemperResults = SteelResults | BrassResults | ClickSpringResults;
+type Output = CalcOutput<SpringTemperResults>;
+
+const show = (n: number, unit: string) => `${String(Number(n.toPrecision(4)))} ${unit}`.trim();
+const normalise = (s: string) =>
+  s
+    .toLowerCase()
+    .replace(/\(.*?\)/g, ' ')
+    .replace(/-/g, ' ')
+    .replace(/gray/g, 'grey')
+    .replace(/\s+/g, ' ')
+    .trim();
+
+function nearestBand(tempC: number): TemperBand | null {
+  const first = TEMPER_COLOURS[0]!;
+  const last = TEMPER_COLOURS[TEMPER_COLOURS.length - 1]!;
+  if (tempC < first.tempC - CHART_MARGIN_C || tempC > last.tempC + CHART_MARGIN_C) return null;
+  // Ties go to the cooler band, the colour that shows first as the steel heats.
+  return TEMPER_COLOURS.reduce((best, b) => (Math.abs(b.tempC - tempC) < Math.abs(best.tempC - tempC) ? b : best));
+}
+
+function interpolate(curve: readonly HardnessPoint[], tempC: number): number | null {
+  for (let i = 0; i + 1 < curve.length; i++) {
+    const lo = curve[i]!;
+    const hi = curve[i + 1]!;
+    if (tempC >= lo.tempC && tempC <= hi.tempC) {
+      return lo.hrc + ((tempC - lo.tempC) * (hi.hrc - lo.hrc)) / (hi.tempC - lo.tempC);
+    }
+  }
+  return null;
+}
+
+function steel(input: z.output<typeof SteelInput>): Output {
+  const warnings: string[] = [];
+  const h = HARDENING[input.steel];
+  const curve = CURVES[input.steel];
+  const t = input.temperatureC;
+  const colourForTemperature = t === undefined ? null : nearestBand(t);
+  const temperatureForColour =
+    input.colour === undefined
+      ? null
+      : (TEMPER_COLOURS.find((b) => normalise(b.name) === normalise(input.colour!)) ?? null);
+  const hardnessAtTemperatureHrc = t === undefined || curve === null ? null : interpolate(curve.points, t);
+  const steps: CalcStep[] = [
+    {
+      label: 'Hardening',
+      formula: `heat to ${h.temperatureC.min}–${h.temperatureC.max} °C, quench in ${h.quench}`,
+      result: h.source,
+    },
+  ];
+
+  if (t !== undefined) {
+    if (colourForTemperature === null) {
+      warnings.push(
+        `${show(t, '°C')} is outside the Sheffield Gauge Plate chart (210–330 °C): no temper colour is shown.`,
+      );
+    } else {
+      steps.push({
+        label: 'Nearest temper colour',
+        formula: 'band with the closest °C',
+        result: `${colourForTemperature.name}, ${colourForTemperature.tempC} °C`,
+      });
+    }
+    if (t >= h.temperatureC.min)
+      warnings.push(`${show(t, '°C')} is a hardening heat for this steel, not a tempering one.`);
+    if (curve === null) {
+      warnings.push('No tempering-hardness table was found for silver steel, so no hardness is given.');
+    } else if (hardnessAtTemperatureHrc === null) {
+      const lo = curve.points[0]!.tempC;
+      const hi = curve.points[curve.points.length - 1]!.tempC;
+      warnings.push(
+        `The hardness table runs from ${lo} to ${hi} °C; ${show(t, '°C')} is outside it, so no hardness is given.`,
+      );
+    } else {
+      steps.push({
+        label: `Hardness after tempering (straight line between table points${input.steel === '1095' ? "; maker's blog, weak" : ''})`,
+        formula: 'HRC = H₁ + (T − T₁)(H₂ − H₁)/(T₂ − T₁)',
+        result: show(hardnessAtTemperatureHrc, 'HRC'),
+      });
+    }
+  }
+  if (input.colour !== undefined) {
+    if (temperatureForColour === null) {
+      warnings.push(`"${input.colour}" is not a colour on the Sheffield Gauge Plate chart; pick one of its names.`);
+    } else {
+      steps.push({
+        label: 'Temperature for the colour',
+        formula: 'chart lookup',
+        result: `${temperatureForColour.tempC} °C (${temperatureForColour.tempF} °F)`,
+      });
+    }
+  }
+
+  return {
+    results: {
+      mode: 'steel',
+      steel: input.steel,
+      hardening: h,
+      colourForTemperature,
+      temperatureForColour,
+      temperColours: [...TEMPER_COLOURS],
+      hardnessCurve: curve === null ? [] : [...curve.points],
+      hardnessCurveSource: curve === null ? null : curve.source,
+      hardnessAtTemperatureHrc,
+    },
+    warnings,
+    steps,
+  };
+}
+
+function brass(input: z.output<typeof BrassInput>): Output {
+  const n = input.numbersHard;
+  const reductionPercent = (1 - Math.pow(BS_GAUGE_RATIO, -n)) * 100;
+  const named = BRASS_TEMPERS.filter((t) => t.numbersHard <= n).at(-1)!;
+  const warnings =
+    n > 10 ? ['No named temper lies beyond extra spring (10 numbers hard); the strength shown is extra spring’s.'] : [];
+  return {
+    results: {
+      mode: 'brass',
+      reductionPercent,
+      temperName: named.name,
+      publishedReductionPercent: named.numbersHard === n ? named.publishedReductionPercent : null,
+      strength: named.strength,
+    },
+    warnings,
+    steps: [
+      { label: 'B&S gauge ratio', formula: 'r = 92^(1/39)', result: show(BS_GAUGE_RATIO, '') },
+      { label: 'Thickness reduction', formula: '1 − r^(−n)', result: show(reductionPercent, '%') },
+      { label: 'Temper', formula: 'each number hard adds a quarter-hard', result: named.name },
+    ],
+  };
+}
+
+function clickSpring(input: z.output<typeof ClickSpringInput>): Output {
+  const { widthMm: b, thicknessMm: t, lengthMm: L, deflectionMm: delta } = input;
+  const E = input.youngsModulusGPa * 1000;
+  const I = (b * t ** 3) / 12;
+  const stiffnessNPerMm = (3 * E * I) / L ** 3;
+  const forceN = stiffnessNPerMm * delta;
+  const stressMPa = (1.5 * E * t * delta) / L ** 2;
+  const y = input.yieldStrengthMPa;
+  const stressToYield = y === undefined ? null : stressMPa / y;
+  const warnings: string[] = [];
+  if (y !== undefined && stressMPa > y) {
+    warnings.push(
+      `Root stress ${show(stressMPa, 'MPa')} is over the yield strength ${show(y, 'MPa')}: the spring will take a set.`,
+    );
+  }
+  if (delta / L > 0.1) {
+    warnings.push(
+      'The deflection is more than a tenth of the length: the small-deflection formula stops holding, so treat the figures as rough.',
+    );
+  }
+  const steps: CalcStep[] = [
+    { label: 'Second moment of area', formula: 'I = b·t³/12', result: show(I, 'mm⁴') },
+    { label: 'Stiffness', formula: 'k = 3EI/L³', result: show(stiffnessNPerMm, 'N/mm') },
+    { label: 'Force at the tip', formula: 'F = 3EIδ/L³', result: show(forceN, 'N') },
+    { label: 'Root stress', formula: 'σ = 1.5·E·t·δ/L²', result: show(stressMPa, 'MPa') },
+  ];
+  if (stressToYield !== null)
+    steps.push({ label: 'Share of yield used', formula: 'σ / σ_y', result: show(stressToYield, '') });
+  return { results: { mode: 'click-spring', forceN, stressMPa, stiffnessNPerMm, stressToYield }, warnings, steps };
+}
+
+export const springTemper: Calculator<typeof SpringTemperInput, SpringTemperResults> = {
+  name: 'spring-temper',
+  title: 'Spring temper',
+  summary:
+    'Steel: hardening heat, temper colours and the hardness they leave. Brass: the temper gained by hammering or rolling. Click springs: force and stress for a given deflection.',
+  inputSchema: SpringTemperInput,
+  compute(raw) {
+    const input = SpringTemperInput.parse(raw);
+    if (input.mode === 'steel') return steel(input);
+    if (input.mode === 'brass') return brass(input);
+    return clickSpring(input);
+  },
+  assumptions: [
+    'Temper colours are for bright carbon steel and depend on time, surface finish and oil film; holding longer at a lower heat gives the same colour. One chart is used throughout.',
+    'Hardness between two table points is read off a straight line; outside the table none is given.',
+    'Brass reduction follows the B&S gauge: each gauge number of cold reduction adds a quarter-hard. Strengths are for C26000 cartridge brass strip; leaded clock brass hammer-hardens less well.',
+    'The click spring is a narrow rectangular cantilever with a small deflection; for a wide plate use E/(1−ν²).',
+  ],
+  sources: [
+    SHEFFIELD,
+    EASTERN,
+    `${NOONS}; truekatana.com (weak)`,
+    'glue-it.com "Heat treating silver steel"',
+    `${PRECISION} (precisionsteel.com/technical-data/tempers/copper-base-alloys)`,
+    OLIN,
+    'makeitfrom.com (C26000 and C38500 moduli)',
+    'brass-copper-castings.com (C38500 cold-working capacity "poor")',
+    'Tokai Bane "Flat springs formulas"',
+  ],
+  cautions: [
+    'Quench oil is a fire risk: use a metal lidded container and never water near hot oil. Hot scale and spatter burn; tongs, face shield, ventilation.',
+    'Water quenching cracks thin or sharp-cornered parts.',
+    'Temper immediately after hardening.',
+    'Colours depend on time, surface finish and oil film. Use an oven or thermometer for repeatable springs.',
+    'Leaded brass: wash hands, no food at the bench, no dry sweeping of filings.',
+    'Heat treatment follows local fire and safety codes and licensed practice; these figures do not replace them.',
+  ],
+};

@@ -1,0 +1,43 @@
+import { fileURLToPath } from 'node:url';
+import tailwindcss from '@tailwindcss/vite';
+import react from '@vitejs/plugin-react';
+import { defineConfig } from 'vitest/config';
+
+const alias = {
+  '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
+  '@': fileURLToPath(new URL('./src', import.meta.url)),
+};
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: { alias },
+  server: {
+    port: 5173,
+    proxy: { '/api': `http://localhost:${process.env.PORT ?? 3000}` },
+  },
+  build: { outDir: 'dist', sourcemap: false, chunkSizeWarningLimit: 600 },
+  test: {
+    projects: [
+      {
+        resolve: { alias },
+        test: {
+          name: 'node',
+          environment: 'node',
+          include: ['tests/shared/**/*.test.ts', 'tests/server/**/*.test.ts'],
+          testTimeout: 20000,
+          hookTimeout: 30000,
+        },
+      },
+      {
+        plugins: [react()],
+        resolve: { alias },
+        test: {
+          name: 'client',
+          environment: 'jsdom',
+          include: ['tests/client/**/*.test.{ts,tsx}'],
+          setupFiles: ['tests/client/setup.ts'],
+        },
+      },
+    ],
+  },
+});
