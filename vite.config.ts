@@ -11,6 +11,8 @@ const alias = {
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   resolve: { alias },
+  // Static files live inside src/ so that the top level keeps only the fixed folders.
+  publicDir: 'src/public',
   server: {
     port: 5173,
     proxy: { '/api': `http://localhost:${process.env.PORT ?? 3000}` },

@@ -1,0 +1,16 @@
+import type { NavItem } from './nav';
+
+/** Counts beside navigation items; each badge name is filled in by the feature that owns the count. */
+export function NavBadge({ name }: { name: NonNullable<NavItem['badge']> }) {
+  const count = useBadgeCount(name);
+  if (!count) return null;
+  return (
+    <span className="num rounded-full bg-brass px-2 text-xs text-white" aria-label={`${count} waiting`}>
+      {count}
+    </span>
+  );
+}
+
+function useBadgeCount(_name: NonNullable<NavItem['badge']>): number {
+  return 0;
+}

@@ -1,0 +1,17 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { useState, type ReactNode } from 'react';
+import { Toaster } from 'sonner';
+import { ApiError } from '@/lib/api-client';
+
+/** 4xx answers are final: retrying a 404 or 403 only delays the message. */
+const retry = (count: number, error: unknown) => !(error instanceof ApiError && error.status >= 400 && error.status < 500) && count < 2;
+
+export function AppProvider({ children }: { children: ReactNode }) {
+  const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { retry, refetchOnWindowFocus: false } } }));
+  return (
+    <QueryClientProvider client={client}>
+      {children}
+      <Toaster position="bottom-right" richColors closeButton />
+    </QueryClientProvider>
+  );
+}

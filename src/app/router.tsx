@@ -1,0 +1,17 @@
+import { createBrowserRouter } from 'react-router-dom';
+import { AppShell } from './app-shell';
+import { RouteError } from './route-error';
+
+/** Created once, outside React; every page module is loaded on demand. */
+export const router = createBrowserRouter([
+  { path: '/sign-in', lazy: () => import('./routes/sign-in'), errorElement: <RouteError /> },
+  {
+    element: <AppShell />,
+    errorElement: <RouteError />,
+    children: [
+      { index: true, lazy: () => import('./routes/today') },
+      // Feature pages are listed here, one line each.
+      { path: '*', lazy: () => import('./routes/not-found') },
+    ],
+  },
+]);

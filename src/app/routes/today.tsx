@@ -1,0 +1,17 @@
+import { Navigate } from 'react-router-dom';
+import { PageHeader } from '@/components/ui/card';
+import { paths } from '@/config/paths';
+import { useUser } from '@/features/auth/api/get-me';
+
+/** "Today": what to do next. Each feature contributes its own panel for the roles it serves. */
+export function Component() {
+  const user = useUser();
+  if (user.role === 'admin') return <Navigate to={paths.guildOffice} replace />;
+  const firstName = user.name.split(' ')[0];
+  return (
+    <>
+      <PageHeader title={`Good to see you, ${firstName}`} lead={user.role === 'apprentice' ? 'Your next lesson, pieces back from review, and this week at the bench.' : 'Pieces waiting for you, log entries to read, and your classes at a glance.'} />
+      <div className="grid gap-6 md:grid-cols-2" />
+    </>
+  );
+}

@@ -1,0 +1,3 @@
+export const authKeys = {
+  me: ['auth', 'me'] as const,
+};
