@@ -17,7 +17,7 @@ export default defineConfig({
     port: 5173,
     proxy: { '/api': `http://localhost:${process.env.PORT ?? 3000}` },
   },
-  build: { outDir: 'dist', sourcemap: false, chunkSizeWarningLimit: 600 },
+  build: { outDir: 'dist', sourcemap: false, manifest: true, chunkSizeWarningLimit: 600 },
   test: {
     projects: [
       {

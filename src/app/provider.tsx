@@ -1,7 +1,9 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { useState, type ReactNode } from 'react';
-import { Toaster } from 'sonner';
+import { lazy, Suspense, useState, type ReactNode } from 'react';
 import { ApiError } from '@/lib/api-client';
+
+// Loaded after the first screen: nothing toasts before the user has done something.
+const Toaster = lazy(() => import('sonner').then((m) => ({ default: m.Toaster })));
 
 /** 4xx answers are final: retrying a 404 or 403 only delays the message. */
 const retry = (count: number, error: unknown) => !(error instanceof ApiError && error.status >= 400 && error.status < 500) && count < 2;
@@ -11,7 +13,9 @@ export function AppProvider({ children }: { children: ReactNode }) {
   return (
     <QueryClientProvider client={client}>
       {children}
-      <Toaster position="bottom-right" richColors closeButton />
+      <Suspense fallback={null}>
+        <Toaster position="bottom-right" richColors closeButton />
+      </Suspense>
     </QueryClientProvider>
   );
 }

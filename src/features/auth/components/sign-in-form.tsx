@@ -1,5 +1,5 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm } from 'react-hook-form';
+import { useState, type FormEvent } from 'react';
+import { z } from 'zod';
 import { Link } from 'react-router-dom';
 import { LoginInput } from '@shared/schemas/user';
 import { Button } from '@/components/ui/button';
@@ -9,15 +9,25 @@ import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { useSignIn } from '../api/sign-in';
 
+/** A plain form on purpose: it is on the first screen, so it stays free of form libraries (see the bundle budget). */
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const signIn = useSignIn();
-  const { register, handleSubmit, formState } = useForm<LoginInput>({ resolver: zodResolver(LoginInput) });
-  const error = signIn.error;
+  const [errors, setErrors] = useState<{ email?: string[]; password?: string[] }>({});
+
+  function submit(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const form = new FormData(e.currentTarget);
+    const parsed = LoginInput.safeParse({ email: form.get('email'), password: form.get('password') });
+    if (!parsed.success) return setErrors(z.flattenError(parsed.error).fieldErrors);
+    setErrors({});
+    signIn.mutate(parsed.data, { onSuccess: onSignedIn });
+  }
+
   return (
-    <form noValidate onSubmit={handleSubmit((input) => signIn.mutate(input, { onSuccess: onSignedIn }))} className="space-y-4">
-      <TextField label="E-mail" type="email" autoComplete="username" error={formState.errors.email?.message} {...register('email')} />
-      <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register('password')} />
-      {error && <ErrorNotice error={error} title={signInErrorTitle(error)} />}
+    <form noValidate onSubmit={submit} className="space-y-4">
+      <TextField label="E-mail" name="email" type="email" autoComplete="username" error={errors.email?.[0]} />
+      <TextField label="Password" name="password" type="password" autoComplete="current-password" error={errors.password?.[0]} />
+      {signIn.error && <ErrorNotice error={signIn.error} title={signInErrorTitle(signIn.error)} />}
       <div className="flex flex-wrap items-center justify-between gap-3">
         <Button type="submit" busy={signIn.isPending}>
           Sign in
