@@ -32,7 +32,8 @@ const EPS = 1e-9;
 const USUAL_CLEARANCE_MM = { min: 0.02, max: 0.05 };
 const USUAL_PIVOT_MM = { min: 0.8, max: 2 };
 
-const show = (n: number, unit: string) => `${String(Number(n.toPrecision(4)))} ${unit}`.trim();
+// Degrees sit on the figure (1.4°); every other unit takes a space (27.5 mm).
+const show = (n: number, unit: string) => `${String(Number(n.toPrecision(4)))}${unit === '°' ? '' : ' '}${unit}`;
 
 /** Diametral taper from two micrometer readings taken `lengthMm` apart; null when they cannot give one. */
 export function taperFromDiameters(d1: number, d2: number, lengthMm: number): number | null {

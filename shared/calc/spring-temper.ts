@@ -1,156 +1,27 @@
 import { z } from 'zod';
 import type { Calculator, CalcOutput, CalcStep } from './types';
+import {
+  BRASS_TEMPERS,
+  CURVES,
+  EASTERN,
+  HARDENING,
+  NOONS,
+  OLIN,
+  PRECISION,
+  SHEFFIELD,
+  TEMPER_COLOURS,
+  type Hardening,
+  type HardnessPoint,
+  type Strength,
+  type TemperBand,
+} from './spring-temper-tables';
 
-const SHEFFIELD = 'Sheffield Gauge Plate chart (https://sheffieldgaugeplate.co.uk/blog/steel-temper-colour-chart/)';
-const EASTERN = 'Eastern Tool Steel O-1 data sheet (easterntoolsteel.com/data/0-1_1.htm)';
-const NOONS = 'noonsknives.blogspot.com "AISI 1095" (maker\'s blog, weak)';
-const PRECISION = 'Precision Steel Warehouse, "Temper designations of wrought copper-base alloys"';
-const OLIN = 'olinbrass.com "C26000 (ASTM B36) Cartridge Brass"';
+export { CLICK_SPRING_MATERIALS } from './spring-temper-tables';
+
 // Each B&S gauge number is this ratio in thickness: 40 sizes span a 92:1 range.
 const BS_GAUGE_RATIO = Math.pow(92, 1 / 39);
-
-export interface TemperBand {
-  name: string;
-  tempC: number;
-  tempF: number;
-  /** Swatch colour chosen to look like the oxide film, for display only. */
-  hex: string;
-  note: string | null;
-}
-const band = (name: string, tempC: number, tempF: number, hex: string, note: string | null = null): TemperBand => ({
-  name,
-  tempC,
-  tempF,
-  hex,
-  note,
-});
-// One chart only: published charts disagree by up to about 20 °C.
-const TEMPER_COLOURS: readonly TemperBand[] = [
-  band('Light yellow', 210, 410, '#eee0a4'),
-  band('Straw', 220, 430, '#e2c473'),
-  band('Yellow', 230, 450, '#d6ad4b'),
-  band('Dark yellow', 240, 460, '#c49634'),
-  band('Yellow brown', 250, 480, '#a97636'),
-  band('Red brown', 260, 500, '#8c4c2f'),
-  band('Purple', 270, 520, '#6b3a5d'),
-  band('Violet', 280, 530, '#56397b'),
-  band('Dark blue', 290, 550, '#253d79'),
-  band('Wedgwood blue', 300, 570, '#4b6fa3'),
-  band('Light blue', 310, 590, '#6f9bc2', 'springs'),
-  band('Grey blue', 320, 610, '#7b8ea2'),
-  band('Grey green', 330, 630, '#7e8e84'),
-];
 // Half the 10 °C band spacing: beyond this past either end of the chart no colour is claimed.
 const CHART_MARGIN_C = 5;
-
-export interface HardnessPoint {
-  tempC: number;
-  hrc: number;
-}
-const points = (table: Record<number, number>): HardnessPoint[] =>
-  Object.entries(table).map(([tempC, hrc]) => ({ tempC: Number(tempC), hrc }));
-// The blog gives 1095 as one-point ranges (63–64 HRC); the midpoint of each range is stored.
-const CURVES = {
-  O1: {
-    source: EASTERN,
-    points: points({ 150: 64, 175: 63, 205: 62, 230: 61, 260: 59, 315: 56, 370: 52, 425: 49, 480: 44, 540: 40 }),
-  },
-  '1095': {
-    source: NOONS,
-    points: points({ 149: 65, 177: 63.5, 204: 62.5, 232: 61.5, 260: 59.5, 288: 57.5, 316: 55.5, 343: 53.5 }),
-  },
-  silver: null,
-} as const;
-
-const HARDENING = {
-  O1: {
-    temperatureC: { min: 790, max: 815 },
-    quench: 'oil, down to about 65 °C (150 °F)',
-    asQuenchedHrc: 65,
-    source: EASTERN,
-  },
-  '1095': {
-    temperatureC: { min: 790, max: 815 },
-    quench: 'fast oil; water or brine only with care, on thick sections',
-    asQuenchedHrc: null,
-    source: `${NOONS}, 800 °C (1475 °F); range 790–815 °C from truekatana.com (weak)`,
-  },
-  silver: {
-    temperatureC: { min: 770, max: 780 },
-    quench: 'water; up to 8 mm (5/16 in) may be oil-hardened from 800–810 °C',
-    asQuenchedHrc: null,
-    source: 'glue-it.com "Heat treating silver steel"',
-  },
-} as const;
-type Hardening = (typeof HARDENING)[keyof typeof HARDENING];
-
-const temper = (
-  name: string,
-  numbersHard: number,
-  published: number | null,
-  [tMinKsi, tMaxKsi, tMinMPa, tMaxMPa, yKsi, yMPa]: [number, number, number, number, number, number],
-  elongationPercent: number | null,
-  note: string | null = null,
-) => ({
-  name,
-  numbersHard,
-  publishedReductionPercent: published,
-  strength: {
-    tensileKsi: { min: tMinKsi, max: tMaxKsi },
-    tensileMPa: { min: tMinMPa, max: tMaxMPa },
-    yieldKsi: yKsi,
-    yieldMPa: yMPa,
-    elongationPercent,
-    note,
-    source: OLIN,
-  },
-});
-type BrassTemper = ReturnType<typeof temper>;
-type Strength = BrassTemper['strength'];
-const EXTRA_SPRING_NOTE =
-  "The page's 755 MPa upper limit does not match its 104 ksi (about 717 MPa); no elongation is given.";
-// Reductions as published (rounded); strengths for C26000 strip as published, including the page's odd 755 MPa.
-const BRASS_TEMPERS: readonly BrassTemper[] = [
-  temper('annealed', 0, null, [45, 61, 310, 420, 21, 145], 53),
-  temper('¼ hard', 1, 10.9, [49, 59, 340, 405, 33, 230], 46),
-  temper('½ hard', 2, 20.7, [57, 67, 395, 460, 51, 350], 30),
-  temper('¾ hard', 3, 29.4, [64, 74, 440, 510, 62, 425], 16),
-  temper('hard', 4, 37.1, [71, 81, 490, 560, 72, 495], 10),
-  temper('extra hard', 6, 50.0, [83, 92, 570, 635, 83, 570], 3),
-  temper('spring', 8, 60.5, [91, 100, 625, 690, 86, 595], 1, 'Elongation 1 % is a minimum.'),
-  temper('extra spring', 10, 68.7, [95, 104, 655, 755, 89, 615], null, EXTRA_SPRING_NOTE),
-];
-
-export interface ClickSpringMaterial {
-  id: string;
-  label: string;
-  youngsModulusGPa: number;
-  yieldStrengthMPa: number | null;
-  source: string;
-}
-const material = (
-  id: string,
-  label: string,
-  youngsModulusGPa: number,
-  yieldStrengthMPa: number | null,
-  source: string,
-): ClickSpringMaterial => ({ id, label, youngsModulusGPa, yieldStrengthMPa, source });
-const slug = (name: string) =>
-  name.replace('¼', 'quarter').replace('½', 'half').replace('¾', 'three-quarter').replace(/ /g, '-');
-export const CLICK_SPRING_MATERIALS: readonly ClickSpringMaterial[] = [
-  material('spring-steel', 'Spring steel', 206, null, 'Tokai Bane "Flat springs formulas", Table 2'),
-  ...BRASS_TEMPERS.map((t) =>
-    material(
-      `c26000-${slug(t.name)}`,
-      `C26000 cartridge brass, ${t.name}`,
-      110,
-      t.strength.yieldMPa,
-      `modulus: makeitfrom.com; yield: ${OLIN}`,
-    ),
-  ),
-  material('leaded-brass', 'Leaded brass C38500', 100, null, 'makeitfrom.com (M20 temper)'),
-];
-
 const SteelInput = z.object({
   mode: z.literal('steel'),
   steel: z.enum(['O1', '1095', 'silver']).default('O1'),
@@ -243,9 +114,9 @@ function steel(input: z.output<typeof SteelInput>): Output {
   const hardnessAtTemperatureHrc = t === undefined || curve === null ? null : interpolate(curve.points, t);
   const steps: CalcStep[] = [
     {
-      label: 'Hardening',
-      formula: `heat to ${h.temperatureC.min}–${h.temperatureC.max} °C, quench in ${h.quench}`,
-      result: h.source,
+      label: 'Hardening heat',
+      formula: `then quench in ${h.quench}`,
+      result: `${h.temperatureC.min}–${h.temperatureC.max} °C`,
     },
   ];
 
@@ -324,7 +195,7 @@ function brass(input: z.output<typeof BrassInput>): Output {
     },
     warnings,
     steps: [
-      { label: 'B&S gauge ratio', formula: 'r = 92^(1/39)', result: show(BS_GAUGE_RATIO, '') },
+      { label: 'B&S gauge ratio', formula: 'r = 92^(1/39)', result: BS_GAUGE_RATIO.toFixed(5) },
       { label: 'Thickness reduction', formula: '1 − r^(−n)', result: show(reductionPercent, '%') },
       { label: 'Temper', formula: 'each number hard adds a quarter-hard', result: named.name },
     ],
