@@ -1,7 +1,9 @@
 import { expect, test } from '@playwright/test';
 import { demo, signIn } from './support/demo';
 
-test('when a visitor opens the home page, then the styled sign-in screen appears with shipped fonts only', async ({ page }) => {
+test('when a visitor opens the home page, then the styled sign-in screen appears with shipped fonts only', async ({
+  page,
+}) => {
   const outside: string[] = [];
   page.on('request', (req) => {
     if (!req.url().startsWith('http://localhost')) outside.push(req.url());
@@ -13,7 +15,9 @@ test('when a visitor opens the home page, then the styled sign-in screen appears
   const background = await page.evaluate(() => getComputedStyle(document.documentElement).backgroundColor);
   expect(background).toBe('rgb(247, 243, 234)');
   await page.evaluate(() => document.fonts.ready);
-  const fonts = await page.evaluate(() => [...document.fonts].filter((f) => f.status === 'loaded').map((f) => f.family));
+  const fonts = await page.evaluate(() =>
+    [...document.fonts].filter((f) => f.status === 'loaded').map((f) => f.family),
+  );
   expect(fonts.join(' ')).toMatch(/Inter/);
   expect(outside).toEqual([]);
 });

@@ -8,7 +8,9 @@ if (!existsSync(chromium)) {
   const hasApt = existsSync('/usr/bin/apt-get');
   if (isRoot && hasApt) {
     console.log('Chromium not found: installing Debian’s chromium package (about a minute)…');
-    execSync('apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium', { stdio: 'inherit' });
+    execSync('apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium', {
+      stdio: 'inherit',
+    });
   } else {
     console.error(
       `No Chromium at ${chromium}. Install Debian's package as root (apt-get install -y chromium), ` +

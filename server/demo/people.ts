@@ -33,6 +33,18 @@ export const DEMO_PEOPLE: DemoPerson[] = [
 export const demoEmail = (key: string) => `${key}@${DEMO_DOMAIN}`;
 
 export const DEMO_CLASSES = {
-  autumn: { name: 'Autumn Bench 2026', course: 'going-train-wall-regulator', startsOn: '2026-09-07', endsOn: '2026-12-18', capacity: 12 },
-  spring: { name: 'Spring Bench 2027', course: 'springs-heat-treatment', startsOn: '2027-03-01', endsOn: '2027-06-25', capacity: 10 },
+  autumn: {
+    name: 'Autumn Bench 2026',
+    course: 'going-train-wall-regulator',
+    startsOn: '2026-09-07',
+    endsOn: '2026-12-18',
+    capacity: 12,
+  },
+  spring: {
+    name: 'Spring Bench 2027',
+    course: 'springs-heat-treatment',
+    startsOn: '2027-03-01',
+    endsOn: '2027-06-25',
+    capacity: 10,
+  },
 } as const;

@@ -25,7 +25,13 @@ export async function seedDemo(sequelize: Sequelize): Promise<void> {
       if (!course) continue;
       const [cls] = await GuildClass.findOrCreate({
         where: { name: spec.name },
-        defaults: { name: spec.name, courseId: course.id, startsOn: spec.startsOn, endsOn: spec.endsOn, capacity: spec.capacity },
+        defaults: {
+          name: spec.name,
+          courseId: course.id,
+          startsOn: spec.startsOn,
+          endsOn: spec.endsOn,
+          capacity: spec.capacity,
+        },
       });
       for (const p of DEMO_PEOPLE.filter((x) => x.cls === key)) {
         const userId = users.get(p.key)!.id;

@@ -15,4 +15,5 @@ export async function startDevMailServer(config: Config): Promise<string | null>
   return devMailInboxUrl(config);
 }
 
-export const devMailInboxUrl = (config: Config) => (config.smtpUrl ? null : `http://localhost:${config.devMailWebPort}`);
+export const devMailInboxUrl = (config: Config) =>
+  config.smtpUrl ? null : `http://localhost:${config.devMailWebPort}`;

@@ -31,7 +31,8 @@ function toAppError(err: unknown): AppError {
     return new AppError(tooLarge ? 'FILE_TOO_LARGE' : 'BAD_UPLOAD', err.message, tooLarge ? 413 : 400);
   }
   if (err instanceof UniqueConstraintError) return AppError.conflict('That already exists.');
-  const status = (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
+  const status =
+    (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
   if (status === 400 && (err as { type?: string }).type === 'entity.parse.failed') {
     return AppError.badRequest('The request body is not valid JSON.');
   }

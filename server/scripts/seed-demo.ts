@@ -7,4 +7,6 @@ const config = loadConfigOrExit();
 const { sequelize } = await openAndMigrate(config);
 await seedDemo(sequelize);
 await sequelize.close();
-console.log(`Demo data is in ${config.dataDir}. Sign in as ned@saltmarsh-guild.test with the password tickwright-demo.`);
+console.log(
+  `Demo data is in ${config.dataDir}. Sign in as ned@saltmarsh-guild.test with the password tickwright-demo.`,
+);

@@ -3,3 +3,99 @@ import { z } from 'zod';
 /** An enrolment row is active or withdrawn; "invited" is shown for invitations not yet accepted. */
 export const EnrolmentStatus = z.enum(['active', 'withdrawn']);
 export type EnrolmentStatus = z.infer<typeof EnrolmentStatus>;
+
+export const RosterStatus = z.enum(['invited', 'active', 'withdrawn']);
+export type RosterStatus = z.infer<typeof RosterStatus>;
+
+const Day = z.iso.date('Enter a date as YYYY-MM-DD.');
+const Id = z.number().int().positive();
+const MentorIds = z.array(Id).max(20, 'At most 20 mentors.');
+
+const classFields = {
+  name: z.string().trim().min(2, 'Give the class a name of at least 2 characters.').max(120),
+  courseId: Id,
+  startsOn: Day,
+  endsOn: Day,
+  capacity: z.number().int().min(1, 'A class has room for at least 1 apprentice.').max(500, 'At most 500 apprentices.'),
+  mentorIds: MentorIds.default([]),
+};
+
+const endsAfterStart = (v: { startsOn?: string; endsOn?: string }) =>
+  !v.startsOn || !v.endsOn || v.endsOn >= v.startsOn;
+const endsAfterStartIssue = { message: 'The class cannot end before it starts.', path: ['endsOn'] };
+
+export const ClassCreateInput = z.object(classFields).refine(endsAfterStart, endsAfterStartIssue);
+export type ClassCreateInput = z.infer<typeof ClassCreateInput>;
+
+/** Any subset of the fields; `archived` archives (true) or brings back (false) the class. */
+export const ClassUpdateInput = z
+  .object({ ...classFields, mentorIds: MentorIds, archived: z.boolean() })
+  .partial()
+  .refine(endsAfterStart, endsAfterStartIssue);
+export type ClassUpdateInput = z.infer<typeof ClassUpdateInput>;
+
+export const ClassListQuery = z.object({
+  /** Absent: every class the viewer may see; "true": archived only; "false": current only. */
+  archived: z.enum(['true', 'false']).optional(),
+});
+export type ClassListQuery = z.infer<typeof ClassListQuery>;
+
+export const PersonRef = z.object({ id: z.number().int(), name: z.string() });
+export type PersonRef = z.infer<typeof PersonRef>;
+
+export const CourseRef = z.object({ id: z.number().int(), title: z.string(), slug: z.string() });
+export type CourseRef = z.infer<typeof CourseRef>;
+
+export const ClassCounts = z.object({
+  active: z.number().int(),
+  withdrawn: z.number().int(),
+  /** Invitations sent and not yet accepted, revoked or expired: each holds a seat. */
+  invited: z.number().int(),
+  seatsLeft: z.number().int(),
+});
+export type ClassCounts = z.infer<typeof ClassCounts>;
+
+export const ClassDTO = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  course: CourseRef,
+  startsOn: z.string(),
+  endsOn: z.string(),
+  capacity: z.number().int(),
+  archived: z.boolean(),
+  archivedAt: z.string().nullable(),
+  mentors: z.array(PersonRef),
+  counts: ClassCounts,
+});
+export type ClassDTO = z.infer<typeof ClassDTO>;
+
+export const ClassListReply = z.object({ classes: z.array(ClassDTO) });
+export type ClassListReply = z.infer<typeof ClassListReply>;
+
+/** What the class form offers: the courses a class can run and the mentors who can lead it. */
+export const ClassFormOptions = z.object({
+  courses: z.array(CourseRef),
+  mentors: z.array(PersonRef.extend({ email: z.string() })),
+});
+export type ClassFormOptions = z.infer<typeof ClassFormOptions>;
+
+export const RosterEntry = z.object({
+  /** Null while the person is only invited and has no account yet. */
+  userId: z.number().int().nullable(),
+  invitationId: z.number().int().nullable(),
+  name: z.string(),
+  email: z.string(),
+  status: RosterStatus,
+  lessonsDone: z.number().int(),
+  projectsPassed: z.number().int(),
+  since: z.string(),
+});
+export type RosterEntry = z.infer<typeof RosterEntry>;
+
+export const RosterReply = z.object({
+  classId: z.number().int(),
+  lessonsTotal: z.number().int(),
+  projectsTotal: z.number().int(),
+  entries: z.array(RosterEntry),
+});
+export type RosterReply = z.infer<typeof RosterReply>;

@@ -15,12 +15,18 @@ export function AppShell() {
   if (!user) return <Navigate to={paths.signIn(location.pathname + location.search)} replace />;
   return (
     <div className="min-h-screen">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-card focus:p-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-card focus:p-2"
+      >
         Skip to content
       </a>
       <header className="no-print border-b border-rule bg-card">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
-          <Link to={paths.home} className="flex items-center gap-2 font-serif text-2xl font-semibold text-ink no-underline">
+          <Link
+            to={paths.home}
+            className="flex items-center gap-2 font-serif text-2xl font-semibold text-ink no-underline"
+          >
             <img src="/favicon.svg" alt="" className="size-7" />
             Tickwright
           </Link>
@@ -32,7 +38,9 @@ export function AppShell() {
                 end={item.to === paths.home}
                 className={({ isActive }) =>
                   `flex min-h-11 items-center gap-2 rounded-md px-3 text-sm font-semibold no-underline ${
-                    isActive ? 'bg-brass/15 text-ink underline decoration-brass decoration-2 underline-offset-8' : 'text-muted hover:text-ink'
+                    isActive
+                      ? 'bg-brass/15 text-ink underline decoration-brass decoration-2 underline-offset-8'
+                      : 'text-muted hover:text-ink'
                   }`
                 }
               >

@@ -6,10 +6,13 @@ import { ApiError } from '@/lib/api-client';
 const Toaster = lazy(() => import('sonner').then((m) => ({ default: m.Toaster })));
 
 /** 4xx answers are final: retrying a 404 or 403 only delays the message. */
-const retry = (count: number, error: unknown) => !(error instanceof ApiError && error.status >= 400 && error.status < 500) && count < 2;
+const retry = (count: number, error: unknown) =>
+  !(error instanceof ApiError && error.status >= 400 && error.status < 500) && count < 2;
 
 export function AppProvider({ children }: { children: ReactNode }) {
-  const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { retry, refetchOnWindowFocus: false } } }));
+  const [client] = useState(
+    () => new QueryClient({ defaultOptions: { queries: { retry, refetchOnWindowFocus: false } } }),
+  );
   return (
     <QueryClientProvider client={client}>
       {children}

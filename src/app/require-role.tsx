@@ -11,7 +11,9 @@ export function RequireRole({ roles, children }: { roles: Role[]; children: Reac
   return (
     <div className="py-16 text-center">
       <h1 className="font-serif text-3xl">Not part of your work</h1>
-      <p className="mt-2 text-muted">This page belongs to another role. If you think you should see it, ask the guild office.</p>
+      <p className="mt-2 text-muted">
+        This page belongs to another role. If you think you should see it, ask the guild office.
+      </p>
       <ButtonLink to={paths.home} className="mt-6">
         Back to Today
       </ButtonLink>

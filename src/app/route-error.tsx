@@ -3,7 +3,11 @@ import { paths } from '@/config/paths';
 
 export function RouteError() {
   const error = useRouteError();
-  const message = isRouteErrorResponse(error) ? `${error.status} ${error.statusText}` : error instanceof Error ? error.message : 'Unknown error';
+  const message = isRouteErrorResponse(error)
+    ? `${error.status} ${error.statusText}`
+    : error instanceof Error
+      ? error.message
+      : 'Unknown error';
   return (
     <div role="alert" className="mx-auto max-w-xl py-16 text-center">
       <h1 className="font-serif text-3xl">Something went wrong on this page</h1>

@@ -34,7 +34,10 @@ export async function api<S extends z.ZodType | undefined = undefined>(
   const res = await fetch(`/api${path}`, {
     method,
     credentials: 'same-origin',
-    headers: body === undefined || isForm ? { Accept: 'application/json' } : { 'Content-Type': 'application/json', Accept: 'application/json' },
+    headers:
+      body === undefined || isForm
+        ? { Accept: 'application/json' }
+        : { 'Content-Type': 'application/json', Accept: 'application/json' },
     body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
     signal,
   });
@@ -66,7 +69,8 @@ export function uploadWithProgress<S extends z.ZodType>(
         }
       } else reject(await toApiError(xhr.status, xhr.responseText, xhr.getResponseHeader('Retry-After')));
     };
-    xhr.onerror = () => reject(new ApiError(0, 'NETWORK', 'The upload could not reach the server. Check the connection and try again.'));
+    xhr.onerror = () =>
+      reject(new ApiError(0, 'NETWORK', 'The upload could not reach the server. Check the connection and try again.'));
     signal?.addEventListener('abort', () => xhr.abort());
     xhr.send(form);
   });

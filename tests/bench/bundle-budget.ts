@@ -33,7 +33,9 @@ export function firstScreenKb(): { kb: number; files: string[] } {
 export function runBundleBudget(): boolean {
   const { kb, files } = firstScreenKb();
   const ok = kb <= BUDGET_KB;
-  console.log(`First-screen JavaScript: ${kb.toFixed(1)} KB gzipped in ${files.length} files (budget ${BUDGET_KB} KB) ${ok ? 'OK' : 'OVER BUDGET'}`);
+  console.log(
+    `First-screen JavaScript: ${kb.toFixed(1)} KB gzipped in ${files.length} files (budget ${BUDGET_KB} KB) ${ok ? 'OK' : 'OVER BUDGET'}`,
+  );
   return ok;
 }
 

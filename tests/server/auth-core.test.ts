@@ -11,7 +11,9 @@ describe('sign-in', () => {
   it('when the password is right, then the user is signed in and /me answers with them', async () => {
     const user = await t.createUser('apprentice', { email: 'Mixed.Case@Example.test' });
     const agent = t.anon();
-    const login = await agent.post('/api/auth/login').send({ email: 'MIXED.case@example.test', password: TEST_PASSWORD });
+    const login = await agent
+      .post('/api/auth/login')
+      .send({ email: 'MIXED.case@example.test', password: TEST_PASSWORD });
     expect(login.status).toBe(200);
     expect(login.body.user).toMatchObject({ id: user.id, email: 'mixed.case@example.test', role: 'apprentice' });
     const me = await agent.get('/api/auth/me');
@@ -22,7 +24,10 @@ describe('sign-in', () => {
   it('when the password is wrong or the e-mail unknown, then both answer the same 401', async () => {
     const user = await t.createUser('mentor');
     const wrong = await t.anon().post('/api/auth/login').send({ email: user.email, password: 'not-the-password' });
-    const unknown = await t.anon().post('/api/auth/login').send({ email: 'nobody@example.test', password: 'whatever-else' });
+    const unknown = await t
+      .anon()
+      .post('/api/auth/login')
+      .send({ email: 'nobody@example.test', password: 'whatever-else' });
     expect(wrong.status).toBe(401);
     expect(wrong.body).toEqual(unknown.body);
     expect(wrong.body.error.code).toBe('BAD_CREDENTIALS');

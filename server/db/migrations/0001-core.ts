@@ -94,7 +94,16 @@ export async function up({ context: qi }: { context: QueryInterface }) {
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {
-  for (const table of ['enrolments', 'class_mentors', 'classes', 'projects', 'lessons', 'courses', 'sessions', 'users']) {
+  for (const table of [
+    'enrolments',
+    'class_mentors',
+    'classes',
+    'projects',
+    'lessons',
+    'courses',
+    'sessions',
+    'users',
+  ]) {
     await qi.dropTable(table);
   }
 }

@@ -37,7 +37,10 @@ export async function visibleApprenticeIds(viewer: UserDTO): Promise<number[] | 
 
 /** Mentors of the classes an apprentice is actively enrolled in: who is told when a piece is sent. */
 export async function mentorsOfApprentice(apprenticeId: number): Promise<number[]> {
-  const enrolments = await Enrolment.findAll({ where: { userId: apprenticeId, status: 'active' }, attributes: ['classId'] });
+  const enrolments = await Enrolment.findAll({
+    where: { userId: apprenticeId, status: 'active' },
+    attributes: ['classId'],
+  });
   const links = await ClassMentor.findAll({ where: { classId: { [Op.in]: enrolments.map((e) => e.classId) } } });
   return [...new Set(links.map((l) => l.userId))];
 }

@@ -43,7 +43,11 @@ export function loadContent(root: string): { courses: LoadedCourse[]; problems: 
     const course = readFront(courseFile, CourseFrontMatter, problems);
     if (!course) continue;
     if (course.meta.slug !== dir) {
-      problems.push({ file: courseFile, line: 1, message: `slug "${course.meta.slug}" must equal the folder name "${dir}"` });
+      problems.push({
+        file: courseFile,
+        line: 1,
+        message: `slug "${course.meta.slug}" must equal the folder name "${dir}"`,
+      });
     }
     const skillKeys = new Set(course.meta.skills.map((s) => s.key));
     const lessons: LoadedLesson[] = [];
@@ -58,7 +62,8 @@ export function loadContent(root: string): { courses: LoadedCourse[]; problems: 
       const lesson = readFront(file, LessonFrontMatter, problems);
       if (!lesson) continue;
       for (const skill of lesson.meta.skills) {
-        if (!skillKeys.has(skill)) problems.push({ file, line: 2, message: `skill "${skill}" is not listed in course.md` });
+        if (!skillKeys.has(skill))
+          problems.push({ file, line: 2, message: `skill "${skill}" is not listed in course.md` });
       }
       lessons.push({ file, slug: match[2], position: Number(match[1]), ...lesson });
     }
@@ -69,7 +74,11 @@ export function loadContent(root: string): { courses: LoadedCourse[]; problems: 
 
 function readFront<T>(
   file: string,
-  schema: { safeParse(v: unknown): { success: true; data: T } | { success: false; error: { issues: { path: PropertyKey[]; message: string }[] } } },
+  schema: {
+    safeParse(
+      v: unknown,
+    ): { success: true; data: T } | { success: false; error: { issues: { path: PropertyKey[]; message: string }[] } };
+  },
   problems: ContentProblem[],
 ): { meta: T; body: string; bodyLineOffset: number } | null {
   let parsed: matter.GrayMatterFile<string>;
@@ -77,7 +86,11 @@ function readFront<T>(
     parsed = matter(readFileSync(file, 'utf8'));
   } catch (err) {
     const mark = (err as { mark?: { line?: number } }).mark;
-    problems.push({ file, line: (mark?.line ?? 0) + 1, message: `front matter is not valid YAML: ${(err as Error).message.split('\n')[0]}` });
+    problems.push({
+      file,
+      line: (mark?.line ?? 0) + 1,
+      message: `front matter is not valid YAML: ${(err as Error).message.split('\n')[0]}`,
+    });
     return null;
   }
   const result = schema.safeParse(parsed.data);

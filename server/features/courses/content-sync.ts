@@ -23,7 +23,10 @@ export async function syncContent(sequelize: Sequelize, root: string, logger?: L
         intro: c.intro,
         retiredAt: null,
       };
-      const [course] = await Course.findOrCreate({ where: { slug: c.meta.slug }, defaults: { slug: c.meta.slug, ...fields } });
+      const [course] = await Course.findOrCreate({
+        where: { slug: c.meta.slug },
+        defaults: { slug: c.meta.slug, ...fields },
+      });
       await course.update(fields);
       keptCourseIds.push(course.id);
       const keptLessonIds: number[] = [];

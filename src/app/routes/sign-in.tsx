@@ -20,11 +20,13 @@ export function Component() {
         <p className="flex items-center gap-3 font-serif text-4xl font-semibold">
           <img src="/favicon.svg" alt="" className="size-10" /> Tickwright
         </p>
-        <h1 className="mt-6 font-serif text-2xl text-ink">Learn clock-movement making at the bench, one made piece at a time.</h1>
+        <h1 className="mt-6 font-serif text-2xl text-ink">
+          Learn clock-movement making at the bench, one made piece at a time.
+        </h1>
         <p className="mt-4 max-w-prose text-muted">
-          Lessons with the bench arithmetic built in, a bench log of hours, measurements and photographs, and mentors who grade
-          the pieces you send against clear criteria. The guild office enrols each class and keeps the record of what every
-          apprentice has been signed off on.
+          Lessons with the bench arithmetic built in, a bench log of hours, measurements and photographs, and mentors
+          who grade the pieces you send against clear criteria. The guild office enrols each class and keeps the record
+          of what every apprentice has been signed off on.
         </p>
       </section>
       <Card>

@@ -10,7 +10,14 @@ export function Component() {
   const firstName = user.name.split(' ')[0];
   return (
     <>
-      <PageHeader title={`Good to see you, ${firstName}`} lead={user.role === 'apprentice' ? 'Your next lesson, pieces back from review, and this week at the bench.' : 'Pieces waiting for you, log entries to read, and your classes at a glance.'} />
+      <PageHeader
+        title={`Good to see you, ${firstName}`}
+        lead={
+          user.role === 'apprentice'
+            ? 'Your next lesson, pieces back from review, and this week at the bench.'
+            : 'Pieces waiting for you, log entries to read, and your classes at a glance.'
+        }
+      />
       <div className="grid gap-6 md:grid-cols-2" />
     </>
   );

@@ -23,8 +23,16 @@ export function Button({
   ...rest
 }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; busy?: boolean }) {
   return (
-    <button type={type} className={buttonClass(variant, className)} disabled={busy || rest.disabled} aria-busy={busy} {...rest}>
-      {busy && <span className="size-4 animate-spin rounded-full border-2 border-current border-t-transparent" aria-hidden />}
+    <button
+      type={type}
+      className={buttonClass(variant, className)}
+      disabled={busy || rest.disabled}
+      aria-busy={busy}
+      {...rest}
+    >
+      {busy && (
+        <span className="size-4 animate-spin rounded-full border-2 border-current border-t-transparent" aria-hidden />
+      )}
       {children}
     </button>
   );

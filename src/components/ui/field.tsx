@@ -1,4 +1,10 @@
-import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
+import {
+  useId,
+  type InputHTMLAttributes,
+  type ReactNode,
+  type SelectHTMLAttributes,
+  type TextareaHTMLAttributes,
+} from 'react';
 
 const control =
   'block w-full min-h-11 rounded-md border border-rule bg-white px-3 py-2 text-ink shadow-inner placeholder:text-muted/70 focus:border-steel aria-[invalid=true]:border-error';
@@ -38,31 +44,68 @@ export function FieldShell({ label, error, hint, children }: FieldShellProps) {
 
 type Common = { label: ReactNode; error?: string; hint?: ReactNode };
 
-export function TextField({ label, error, hint, className = '', ...rest }: Common & InputHTMLAttributes<HTMLInputElement>) {
+export function TextField({
+  label,
+  error,
+  hint,
+  className = '',
+  ...rest
+}: Common & InputHTMLAttributes<HTMLInputElement>) {
   return (
     <FieldShell label={label} error={error} hint={hint}>
       {({ id, describedBy, invalid }) => (
-        <input id={id} aria-describedby={describedBy} aria-invalid={invalid} className={`${control} ${className}`} {...rest} />
+        <input
+          id={id}
+          aria-describedby={describedBy}
+          aria-invalid={invalid}
+          className={`${control} ${className}`}
+          {...rest}
+        />
       )}
     </FieldShell>
   );
 }
 
-export function TextArea({ label, error, hint, className = '', ...rest }: Common & TextareaHTMLAttributes<HTMLTextAreaElement>) {
+export function TextArea({
+  label,
+  error,
+  hint,
+  className = '',
+  ...rest
+}: Common & TextareaHTMLAttributes<HTMLTextAreaElement>) {
   return (
     <FieldShell label={label} error={error} hint={hint}>
       {({ id, describedBy, invalid }) => (
-        <textarea id={id} aria-describedby={describedBy} aria-invalid={invalid} className={`${control} ${className}`} {...rest} />
+        <textarea
+          id={id}
+          aria-describedby={describedBy}
+          aria-invalid={invalid}
+          className={`${control} ${className}`}
+          {...rest}
+        />
       )}
     </FieldShell>
   );
 }
 
-export function SelectField({ label, error, hint, className = '', children, ...rest }: Common & SelectHTMLAttributes<HTMLSelectElement>) {
+export function SelectField({
+  label,
+  error,
+  hint,
+  className = '',
+  children,
+  ...rest
+}: Common & SelectHTMLAttributes<HTMLSelectElement>) {
   return (
     <FieldShell label={label} error={error} hint={hint}>
       {({ id, describedBy, invalid }) => (
-        <select id={id} aria-describedby={describedBy} aria-invalid={invalid} className={`${control} ${className}`} {...rest}>
+        <select
+          id={id}
+          aria-describedby={describedBy}
+          aria-invalid={invalid}
+          className={`${control} ${className}`}
+          {...rest}
+        >
           {children}
         </select>
       )}

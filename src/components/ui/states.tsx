@@ -33,7 +33,14 @@ export function ErrorNotice({ error, title = 'That did not work' }: { error: unk
 export function ProgressBar({ value, label }: { value: number; label: string }) {
   const pct = Math.round(Math.max(0, Math.min(1, value)) * 100);
   return (
-    <div role="progressbar" aria-label={label} aria-valuemin={0} aria-valuemax={100} aria-valuenow={pct} className="h-2 w-full overflow-hidden rounded-full bg-rule">
+    <div
+      role="progressbar"
+      aria-label={label}
+      aria-valuemin={0}
+      aria-valuemax={100}
+      aria-valuenow={pct}
+      className="h-2 w-full overflow-hidden rounded-full bg-rule"
+    >
       <div className="h-full rounded-full bg-brass transition-[width]" style={{ width: `${pct}%` }} />
     </div>
   );

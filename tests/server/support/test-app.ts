@@ -28,7 +28,13 @@ export interface SentMail {
  */
 export async function createTestApp(env: Record<string, string> = {}) {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'tickwright-test-'));
-  const config = loadConfig({ NODE_ENV: 'test', DATA_DIR: dataDir, APP_URL: ORIGIN, SESSION_SECRET: 'test-secret-test-secret', ...env });
+  const config = loadConfig({
+    NODE_ENV: 'test',
+    DATA_DIR: dataDir,
+    APP_URL: ORIGIN,
+    SESSION_SECRET: 'test-secret-test-secret',
+    ...env,
+  });
   const logger = createLogger(config);
   const { sequelize } = await openAndMigrate(config);
   const outbox: SentMail[] = [];
@@ -58,7 +64,10 @@ export async function createTestApp(env: Record<string, string> = {}) {
   async function signIn(roleOrUser: Role | User) {
     const user = typeof roleOrUser === 'string' ? await createUser(roleOrUser) : roleOrUser;
     const agent = request.agent(app);
-    const res = await agent.post('/api/auth/login').set('Origin', ORIGIN).send({ email: user.email, password: TEST_PASSWORD });
+    const res = await agent
+      .post('/api/auth/login')
+      .set('Origin', ORIGIN)
+      .send({ email: user.email, password: TEST_PASSWORD });
     if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`);
     return { agent: withOrigin(agent), user };
   }
@@ -68,7 +77,17 @@ export async function createTestApp(env: Record<string, string> = {}) {
     rmSync(dataDir, { recursive: true, force: true });
   }
 
-  return { app, sequelize, config, dataDir, outbox, createUser, signIn, close, anon: () => withOrigin(request.agent(app)) };
+  return {
+    app,
+    sequelize,
+    config,
+    dataDir,
+    outbox,
+    createUser,
+    signIn,
+    close,
+    anon: () => withOrigin(request.agent(app)),
+  };
 }
 
 export type TestApp = Awaited<ReturnType<typeof createTestApp>>;

@@ -26,7 +26,13 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   return (
     <form noValidate onSubmit={submit} className="space-y-4">
       <TextField label="E-mail" name="email" type="email" autoComplete="username" error={errors.email?.[0]} />
-      <TextField label="Password" name="password" type="password" autoComplete="current-password" error={errors.password?.[0]} />
+      <TextField
+        label="Password"
+        name="password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.password?.[0]}
+      />
       {signIn.error && <ErrorNotice error={signIn.error} title={signInErrorTitle(signIn.error)} />}
       <div className="flex flex-wrap items-center justify-between gap-3">
         <Button type="submit" busy={signIn.isPending}>

@@ -11,11 +11,18 @@ export function UserMenu({ user }: { user: UserDTO }) {
   const navigate = useNavigate();
   return (
     <div className="flex items-center gap-2 text-sm">
-      <Link to={paths.account} className="flex min-h-11 flex-col justify-center rounded-md px-2 no-underline hover:bg-rule/40">
+      <Link
+        to={paths.account}
+        className="flex min-h-11 flex-col justify-center rounded-md px-2 no-underline hover:bg-rule/40"
+      >
         <span className="font-semibold text-ink">{user.name}</span>
         <span className="text-xs text-muted">{ROLE_LABEL[user.role]}</span>
       </Link>
-      <Button variant="secondary" busy={signOut.isPending} onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.signIn()) })}>
+      <Button
+        variant="secondary"
+        busy={signOut.isPending}
+        onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.signIn()) })}
+      >
         Sign out
       </Button>
     </div>
