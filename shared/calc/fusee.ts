@@ -37,14 +37,26 @@ export const FuseeInput = z
     const R = v.barrelDiameterMm / 2;
     const r = v.arborDiameterMm / 2;
     if (r >= R) {
-      ctx.addIssue({ code: 'custom', path: ['arborDiameterMm'], message: 'The arbor must be smaller than the barrel.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['arborDiameterMm'],
+        message: 'The arbor must be smaller than the barrel.',
+      });
       return;
     }
     if (v.springThicknessMm > R - r) {
-      ctx.addIssue({ code: 'custom', path: ['springThicknessMm'], message: 'The spring is thicker than the gap between arbor and barrel.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['springThicknessMm'],
+        message: 'The spring is thicker than the gap between arbor and barrel.',
+      });
     }
     if (v.springLengthMm !== undefined && v.springLengthMm * v.springThicknessMm > Math.PI * (R * R - r * r)) {
-      ctx.addIssue({ code: 'custom', path: ['springLengthMm'], message: 'The spring is longer than the barrel can hold.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['springLengthMm'],
+        message: 'The spring is longer than the barrel can hold.',
+      });
     }
   });
 export type FuseeInput = z.input<typeof FuseeInput>;
@@ -97,16 +109,27 @@ export const fusee: Calculator<typeof FuseeInput, FuseeResults> = {
     const halfFillLength = (Math.PI * (R * R - r * r)) / (2 * t);
     const springLengthMm = input.springLengthMm ?? halfFillLength;
     steps.push({
-      label: input.springLengthMm === undefined ? 'Spring length (half the free area)' : 'Length at half fill, for comparison',
+      label:
+        input.springLengthMm === undefined
+          ? 'Spring length (half the free area)'
+          : 'Length at half fill, for comparison',
       formula: `L = π(R² − r²)/(2t) = π(${num(R)}² − ${num(r)}²) / (2 × ${num(t)}) mm`,
       result: `${num(halfFillLength)} mm`,
     });
 
     const fill = barrelFill(R, r, t, springLengthMm);
     steps.push(
-      { label: 'Coils run down (against the barrel)', formula: `n_d = [R − √(R² − Lt/π)]/t`, result: num(fill.coilsRunDown) },
+      {
+        label: 'Coils run down (against the barrel)',
+        formula: `n_d = [R − √(R² − Lt/π)]/t`,
+        result: num(fill.coilsRunDown),
+      },
       { label: 'Coils wound up (on the arbor)', formula: `n_u = [√(r² + Lt/π) − r]/t`, result: num(fill.coilsWoundUp) },
-      { label: 'Turns of the barrel', formula: `N = n_u − n_d = ${num(fill.coilsWoundUp)} − ${num(fill.coilsRunDown)}`, result: `${num(fill.turns)} turns` },
+      {
+        label: 'Turns of the barrel',
+        formula: `N = n_u − n_d = ${num(fill.coilsWoundUp)} − ${num(fill.coilsRunDown)}`,
+        result: `${num(fill.turns)} turns`,
+      },
     );
     const bestTurns = barrelFill(R, r, t, halfFillLength).turns;
     if (fill.turns < (1 - TURNS_LOSS_TO_WARN) * bestTurns) {
@@ -115,7 +138,9 @@ export const fusee: Calculator<typeof FuseeInput, FuseeResults> = {
       );
     }
     if (d < SMALLEST_USUAL_ARBOR_FRACTION * D) {
-      warnings.push('The arbor is smaller than about a third of the barrel diameter; the inner coil is bent hard and the spring may set.');
+      warnings.push(
+        'The arbor is smaller than about a third of the barrel diameter; the inner coil is bent hard and the spring may set.',
+      );
     }
 
     const results: FuseeResults = {
@@ -159,11 +184,31 @@ export const fusee: Calculator<typeof FuseeInput, FuseeResults> = {
       results.spreadBeforePercent = spreadPercent(torques);
       results.spreadAfterPercent = spreadPercent(fuseeTorqueNmm);
       steps.push(
-        { label: 'Spring torque per reading', formula: 'T = m·g·x (m in kg, g = 9.80665 m/s², x in mm)', result: torques.map((T) => `${num(T)} N·mm`).join(', ') },
-        { label: 'Chain tension on the weakest turn', formula: `F = T_min/R_b = ${num(tMin)} N·mm / ${num(Rb)} mm`, result: `${num(tMin / Rb)} N` },
-        { label: 'Fusee radii', formula: `r = r_max·T_min/T = ${num(rMax)} mm × ${num(tMin)} N·mm / T`, result: radiiMm.map((x) => `${num(x)} mm`).join(', ') },
-        { label: 'Output torque at the fusee', formula: `Q = T·r/R_b`, result: `${num(fuseeTorqueNmm[0])} N·mm on every turn` },
-        { label: 'Spread of the spring torque', formula: '(max − min)/mean × 100', result: `${num(results.spreadBeforePercent)} %` },
+        {
+          label: 'Spring torque per reading',
+          formula: 'T = m·g·x (m in kg, g = 9.80665 m/s², x in mm)',
+          result: torques.map((T) => `${num(T)} N·mm`).join(', '),
+        },
+        {
+          label: 'Chain tension on the weakest turn',
+          formula: `F = T_min/R_b = ${num(tMin)} N·mm / ${num(Rb)} mm`,
+          result: `${num(tMin / Rb)} N`,
+        },
+        {
+          label: 'Fusee radii',
+          formula: `r = r_max·T_min/T = ${num(rMax)} mm × ${num(tMin)} N·mm / T`,
+          result: radiiMm.map((x) => `${num(x)} mm`).join(', '),
+        },
+        {
+          label: 'Output torque at the fusee',
+          formula: `Q = T·r/R_b`,
+          result: `${num(fuseeTorqueNmm[0])} N·mm on every turn`,
+        },
+        {
+          label: 'Spread of the spring torque',
+          formula: '(max − min)/mean × 100',
+          result: `${num(results.spreadBeforePercent)} %`,
+        },
       );
       const falls = torques.findIndex((T, i) => i > 0 && T < torques[i - 1]);
       if (falls > 0) {
@@ -172,7 +217,9 @@ export const fusee: Calculator<typeof FuseeInput, FuseeResults> = {
         );
       }
       if (readings.length > Math.ceil(fill.turns) + 1) {
-        warnings.push(`There are ${readings.length} readings but the barrel gives only about ${num(fill.turns)} turns; check the spring sizes.`);
+        warnings.push(
+          `There are ${readings.length} readings but the barrel gives only about ${num(fill.turns)} turns; check the spring sizes.`,
+        );
       }
     }
     return { results, warnings, steps };

@@ -50,7 +50,7 @@ export const TrainPendulumInput = z
   });
 export type TrainPendulumInput = z.input<typeof TrainPendulumInput>;
 
-export interface TrainSuggestion {
+interface TrainSuggestion {
   wheelTeeth: number[];
   pinionLeaves: number[];
   escapeTeeth: number;
@@ -89,17 +89,20 @@ function pinionSets(k: number, max: number = PINION.max): number[][] {
   return sets;
 }
 
-/** Every non-increasing list of `k` wheel counts in range whose product is `total`. */
-function wheelSets(total: number, k: number, max: number = WHEEL.max): number[][] {
-  if (k === 1) return total >= WHEEL.min && total <= max ? [[total]] : [];
-  const sets: number[][] = [];
+/** Calls `visit` with every non-increasing list of `k` wheel counts in range whose product is `total`. */
+function eachWheelSet(total: number, k: number, max: number, chosen: number[], visit: (w: number[]) => void) {
+  if (k === 1) {
+    if (total >= WHEEL.min && total <= max) visit([...chosen, total]);
+    return;
+  }
   for (let w = max; w >= WHEEL.min; w--) {
     if (total % w !== 0) continue;
     const rest = total / w;
     if (rest < WHEEL.min ** (k - 1) || rest > w ** (k - 1)) continue;
-    for (const tail of wheelSets(rest, k - 1, w)) sets.push([w, ...tail]);
+    chosen.push(w);
+    eachWheelSet(rest, k - 1, w, chosen, visit);
+    chosen.pop();
   }
-  return sets;
 }
 
 function ratioSpread(s: TrainSuggestion): number {
@@ -107,28 +110,71 @@ function ratioSpread(s: TrainSuggestion): number {
   return Math.max(...ratios) / Math.min(...ratios);
 }
 
+interface Ranked {
+  suggestion: TrainSuggestion;
+  smallPinions: number;
+  count: number;
+  spread: number;
+}
+
+const compareLists = (a: number[], b: number[]) => a.reduce((c, x, i) => c || x - b[i], 0);
+
+// The last keys only make the order repeatable when two trains tie on everything that matters.
+const compareRanked = (a: Ranked, b: Ranked) =>
+  a.smallPinions - b.smallPinions ||
+  a.count - b.count ||
+  a.spread - b.spread ||
+  a.suggestion.escapeTeeth - b.suggestion.escapeTeeth ||
+  compareLists(a.suggestion.wheelTeeth, b.suggestion.wheelTeeth) ||
+  compareLists(a.suggestion.pinionLeaves, b.suggestion.pinionLeaves);
+
 /**
  * Trains of `pairs` wheel/pinion pairs and an escape wheel that give exactly `target` beats per hour, best first:
- * fewest pinions under 8 leaves, then fewest teeth and leaves in all, then the most even ratios.
+ * fewest pinions under 8 leaves, then fewest teeth and leaves in all (less cutting), then the most even ratios.
  */
 export function searchTrains(target: number, pairs: number, limit: number): TrainSuggestion[] {
-  if (!Number.isInteger(target) || target <= 0 || !Number.isInteger(pairs) || pairs < 1 || pairs > MAX_PAIRS) return [];
-  const found: TrainSuggestion[] = [];
-  const leafSets = pinionSets(pairs);
-  for (let e = ESCAPE.min; e <= ESCAPE.max; e++) {
-    for (const leaves of leafSets) {
-      // BPH = 2·e·ΠW/ΠP, so the wheels must multiply to target·ΠP/(2e), a whole number.
-      const needed = target * product(leaves);
+  const keep = Math.floor(limit);
+  const valid = Number.isInteger(target) && Number.isInteger(pairs) && target > 0 && pairs >= 1 && pairs <= MAX_PAIRS;
+  if (!valid || !(keep >= 1)) return [];
+  // Each pinion set and escape wheel fixes the product the wheels must reach: BPH = 2·e·ΠW/ΠP, so
+  // ΠW = target·ΠP/(2e), a whole number within the wheel range.
+  const starts = pinionSets(pairs).flatMap((leaves) => {
+    const smallPinions = leaves.filter((p) => p < 8).length;
+    const needed = target * product(leaves);
+    const base = sum(leaves);
+    const found = [];
+    for (let e = ESCAPE.min; e <= ESCAPE.max; e++) {
       if (needed % (2 * e) !== 0) continue;
-      for (const wheels of wheelSets(needed / (2 * e), pairs)) {
-        found.push({ wheelTeeth: wheels, pinionLeaves: leaves, escapeTeeth: e, beatsPerHour: target });
-      }
+      const wheelProduct = needed / (2 * e);
+      if (wheelProduct < WHEEL.min ** pairs || wheelProduct > WHEEL.max ** pairs) continue;
+      // Wheels of a fixed product add up to at least pairs·ⁿ√product (AM–GM), which bounds the count from below.
+      const least = base + e + pairs * Math.max(WHEEL.min, wheelProduct ** (1 / pairs));
+      found.push({ leaves, e, smallPinions, wheelProduct, base: base + e, least });
     }
+    return found;
+  });
+  // Most promising first, so the search can stop once nothing left could beat the worst train kept.
+  starts.sort((a, b) => a.smallPinions - b.smallPinions || a.least - b.least);
+
+  const best: Ranked[] = [];
+  for (const { leaves, e, smallPinions, wheelProduct, base, least } of starts) {
+    const worst = best.length === keep ? best[keep - 1] : undefined;
+    if (worst && (smallPinions > worst.smallPinions || least > worst.count + 1e-9)) break;
+    eachWheelSet(wheelProduct, pairs, WHEEL.max, [], (wheels) => {
+      const suggestion = { wheelTeeth: wheels, pinionLeaves: leaves, escapeTeeth: e, beatsPerHour: target };
+      const entry = { suggestion, smallPinions, count: base + sum(wheels), spread: ratioSpread(suggestion) };
+      if (best.length === keep && compareRanked(entry, best[keep - 1]) >= 0) return;
+      let lo = 0;
+      for (let hi = best.length; lo < hi;) {
+        const mid = (lo + hi) >> 1;
+        if (compareRanked(best[mid], entry) <= 0) lo = mid + 1;
+        else hi = mid;
+      }
+      best.splice(lo, 0, entry);
+      if (best.length > keep) best.pop();
+    });
   }
-  const smallPinions = (s: TrainSuggestion) => s.pinionLeaves.filter((p) => p < 8).length;
-  const count = (s: TrainSuggestion) => s.escapeTeeth + sum(s.wheelTeeth) + sum(s.pinionLeaves);
-  found.sort((a, b) => smallPinions(a) - smallPinions(b) || count(a) - count(b) || ratioSpread(a) - ratioSpread(b));
-  return found.slice(0, Math.max(0, Math.floor(limit)));
+  return best.map((b) => b.suggestion);
 }
 
 type Pendulum = NonNullable<z.output<typeof TrainPendulumInput>['pendulum']>;
@@ -137,7 +183,14 @@ type Pendulum = NonNullable<z.output<typeof TrainPendulumInput>['pendulum']>;
 function equivalentLength(p: Pendulum): { lengthMm: number; step: CalcStep } {
   if (p.kind === 'rod') {
     const lengthMm = (2 * p.rodLengthMm) / 3;
-    return { lengthMm, step: { label: 'Equivalent length, uniform rod', formula: `2L/3 = 2 × ${num(p.rodLengthMm)} mm / 3`, result: `${num(lengthMm)} mm` } };
+    return {
+      lengthMm,
+      step: {
+        label: 'Equivalent length, uniform rod',
+        formula: `2L/3 = 2 × ${num(p.rodLengthMm)} mm / 3`,
+        result: `${num(lengthMm)} mm`,
+      },
+    };
   }
   const { rodLengthMm: l, rodMassG: mr, bobMassG: mb, bobCentreMm: c } = p;
   const rho = p.bobRadiusMm ?? 0;
@@ -190,7 +243,9 @@ export const trainPendulum: Calculator<typeof TrainPendulumInput, TrainPendulumR
       );
     }
     if (g < USUAL_GRAVITY.min || g > USUAL_GRAVITY.max) {
-      warnings.push(`Gravity of ${num(g)} m/s² is outside what is found at the Earth's surface (about 9.78–9.83 m/s²).`);
+      warnings.push(
+        `Gravity of ${num(g)} m/s² is outside what is found at the Earth's surface (about 9.78–9.83 m/s²).`,
+      );
     }
     if (pinionLeaves.some((p) => p < PINION.min)) {
       warnings.push(`A pinion of fewer than ${PINION.min} leaves is unusual in a clock train and runs roughly.`);

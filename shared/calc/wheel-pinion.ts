@@ -133,7 +133,11 @@ export const wheelPinion: Calculator<typeof WheelPinionInput, WheelPinionResults
           formula: `dₐ = m(z + ${allowance}) = ${num(m)} × (${zp} + ${allowance})`,
           result: mm(pinionBlankDiameterMm),
         },
-        { label: 'Pinion addendum', formula: `${allowance / 2}·m = ${allowance / 2} × ${num(m)}`, result: mm(pinionAddendumMm) },
+        {
+          label: 'Pinion addendum',
+          formula: `${allowance / 2}·m = ${allowance / 2} × ${num(m)}`,
+          result: mm(pinionAddendumMm),
+        },
       );
       if (zp > 16) {
         warnings.push(
@@ -141,7 +145,9 @@ export const wheelPinion: Calculator<typeof WheelPinionInput, WheelPinionResults
         );
       }
       if (zp < 6) {
-        warnings.push(`A leaf pinion of ${zp} leaves is below the 6 leaves usual in clocks; expect heavy engaging friction.`);
+        warnings.push(
+          `A leaf pinion of ${zp} leaves is below the 6 leaves usual in clocks; expect heavy engaging friction.`,
+        );
       }
     }
 
@@ -149,7 +155,9 @@ export const wheelPinion: Calculator<typeof WheelPinionInput, WheelPinionResults
       warnings.push(`The wheel blank rule is stated for wheels of 17 teeth or more; ${zw} teeth is outside it.`);
     }
     if (zw < zp) {
-      warnings.push('The wheel has fewer teeth than the pinion has leaves; clock trains gear up from wheel to pinion and these proportions assume it.');
+      warnings.push(
+        'The wheel has fewer teeth than the pinion has leaves; clock trains gear up from wheel to pinion and these proportions assume it.',
+      );
     }
     if (m < USUAL_MODULE_MM.min || m > USUAL_MODULE_MM.max) {
       warnings.push(
@@ -194,7 +202,7 @@ export const wheelPinion: Calculator<typeof WheelPinionInput, WheelPinionResults
   ],
 };
 
-export interface MeshDrawing {
+interface MeshDrawing {
   wheel: { cx: number; cy: number; pitchRadiusMm: number; blankRadiusMm: number };
   pinion: { cx: number; cy: number; pitchRadiusMm: number; blankRadiusMm: number };
   /** Where the pitch circles touch, on the line of centres. */
@@ -207,7 +215,11 @@ export interface MeshDrawing {
 export function meshDrawing(
   r: Pick<
     WheelPinionResults,
-    'wheelPitchDiameterMm' | 'pinionPitchDiameterMm' | 'centreDistanceMm' | 'wheelBlankDiameterMm' | 'pinionBlankDiameterMm'
+    | 'wheelPitchDiameterMm'
+    | 'pinionPitchDiameterMm'
+    | 'centreDistanceMm'
+    | 'wheelBlankDiameterMm'
+    | 'pinionBlankDiameterMm'
   >,
 ): MeshDrawing {
   const wheelBlank = r.wheelBlankDiameterMm / 2;
