@@ -7,6 +7,7 @@ import type { Config } from './config/env';
 import { authRouter } from './features/auth/auth.router';
 import { originCheck } from './features/auth/origin-check';
 import { sessionMiddleware } from './features/auth/session';
+import { calculationsRouter } from './features/calculations/calculations.router';
 import { healthRouter } from './features/health/health.router';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import type { Logger } from './lib/logger';
@@ -55,6 +56,7 @@ export function createApp(deps: AppDeps) {
   api.use(originCheck(config.appUrl));
   api.use('/auth', authRouter());
   // Feature routers are mounted here, one line each.
+  api.use('/calculations', calculationsRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

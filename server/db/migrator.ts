@@ -1,6 +1,7 @@
 import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as m0001 from './migrations/0001-core';
+import * as m0004 from './migrations/0004-calculations';
 
 export type Migration = {
   up: (ctx: { context: QueryInterface }) => Promise<void>;
@@ -10,6 +11,7 @@ export type Migration = {
 /** Listed here rather than globbed, so the same list works under tsx, vitest and a bundled build. */
 const migrations: Record<string, Migration> = {
   '0001-core': m0001,
+  '0004-calculations': m0004,
 };
 
 export function createMigrator(sequelize: Sequelize) {

@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { Session } from '../features/auth/session.model';
 import { User } from '../features/auth/user.model';
+import { Calculation } from '../features/calculations/calculation.model';
 import { initClassModels } from '../features/classes/class.model';
 import { initCourseModels } from '../features/courses/course.model';
 
@@ -10,4 +11,5 @@ export function initModels(sequelize: Sequelize) {
   Session.initModel(sequelize);
   initCourseModels(sequelize);
   initClassModels(sequelize);
+  Calculation.initModel(sequelize);
 }
