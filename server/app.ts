@@ -4,10 +4,13 @@ import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config/env';
+import { auditRouter } from './features/audit/audit.router';
 import { authRouter } from './features/auth/auth.router';
 import { originCheck } from './features/auth/origin-check';
 import { sessionMiddleware } from './features/auth/session';
 import { calculationsRouter } from './features/calculations/calculations.router';
+import { classesRouter } from './features/classes/classes.router';
+import { invitationsRouter } from './features/classes/invitations.router';
 import { healthRouter } from './features/health/health.router';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import type { Logger } from './lib/logger';
@@ -57,6 +60,9 @@ export function createApp(deps: AppDeps) {
   api.use('/auth', authRouter());
   // Feature routers are mounted here, one line each.
   api.use('/calculations', calculationsRouter());
+  api.use('/classes', classesRouter(deps));
+  api.use('/invitations', invitationsRouter(deps));
+  api.use('/audit', auditRouter());
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -2,6 +2,7 @@ import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as m0001 from './migrations/0001-core';
 import * as m0004 from './migrations/0004-calculations';
+import * as m0007 from './migrations/0007-invitations-audit';
 
 export type Migration = {
   up: (ctx: { context: QueryInterface }) => Promise<void>;
@@ -12,6 +13,7 @@ export type Migration = {
 const migrations: Record<string, Migration> = {
   '0001-core': m0001,
   '0004-calculations': m0004,
+  '0007-invitations-audit': m0007,
 };
 
 export function createMigrator(sequelize: Sequelize) {

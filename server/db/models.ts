@@ -1,8 +1,10 @@
 import type { Sequelize } from 'sequelize';
+import { initAuditModel } from '../features/audit/audit-event.model';
 import { Session } from '../features/auth/session.model';
 import { User } from '../features/auth/user.model';
 import { Calculation } from '../features/calculations/calculation.model';
 import { initClassModels } from '../features/classes/class.model';
+import { initInvitationModel } from '../features/classes/invitation.model';
 import { initCourseModels } from '../features/courses/course.model';
 
 /** Every model is initialised here, once per Sequelize instance; each feature registers its own in one line. */
@@ -11,5 +13,7 @@ export function initModels(sequelize: Sequelize) {
   Session.initModel(sequelize);
   initCourseModels(sequelize);
   initClassModels(sequelize);
+  initInvitationModel(sequelize);
+  initAuditModel(sequelize);
   Calculation.initModel(sequelize);
 }

@@ -1,0 +1,117 @@
+import { Router } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import multer from 'multer';
+import {
+  AcceptInvitationInput,
+  InvitationListQuery,
+  InviteInput,
+  RosterImportInput,
+  type RosterPreviewReply,
+} from '@shared/schemas/invitation';
+import type { Config } from '../../config/env';
+import { AppError } from '../../lib/app-error';
+import type { Logger } from '../../lib/logger';
+import type { Mailer } from '../../lib/mailer';
+import { idParam, parseBody, parseQuery } from '../../lib/validate';
+import { currentUser, requireRole } from '../auth/guards';
+import { acceptInvitation, previewInvitation } from './invitation-accept.service';
+import { inviteToClass, listPendingInvitations, previewInvites, resendInvitation, revokeInvitation } from './invitations.service';
+import { parseRosterCsv } from './roster-csv';
+
+export interface InvitationDeps {
+  mailer: Mailer;
+  config: Config;
+  logger: Logger;
+}
+
+const mailDeps = (deps: InvitationDeps) => ({ mailer: deps.mailer, appUrl: deps.config.appUrl, logger: deps.logger });
+
+// A roster of 200 people is a few kilobytes; anything near this limit is not a roster.
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 256 * 1024, files: 1 } }).single('file');
+const TEXT_TYPES = new Set(['text/csv', 'text/plain', 'application/csv', 'text/x-csv', 'application/vnd.ms-excel', 'application/octet-stream', '']);
+
+/** Mounted inside the classes router: invitations and roster files for one class, admin only. */
+export function classInvitationsRouter(deps: InvitationDeps) {
+  const router = Router();
+  const admin = requireRole('admin');
+  const classId = (req: Parameters<typeof idParam>[0]) => {
+    const id = idParam(req);
+    if (id < 0) throw AppError.notFound('That class');
+    return id;
+  };
+
+  router.post('/:id/invitations', admin, async (req, res) => {
+    const id = classId(req);
+    const { emails } = parseBody(InviteInput, req);
+    const invitees = emails.map((email) => ({ email, name: null }));
+    res.json({ results: await inviteToClass(id, invitees, currentUser(req), mailDeps(deps), 'e-mail') });
+  });
+
+  router.post('/:id/roster/preview', admin, upload, async (req, res) => {
+    const id = classId(req);
+    if (!req.file) throw AppError.badRequest('Choose a CSV file to upload (field "file").');
+    if (!TEXT_TYPES.has(req.file.mimetype)) {
+      throw new AppError('NOT_A_CSV', 'That file is not a CSV roster (a spreadsheet saved as CSV is). Nothing was imported.', 415);
+    }
+    const rows = await previewInvites(id, parseRosterCsv(req.file.buffer));
+    const okCount = rows.filter((r) => r.ok).length;
+    const reply: RosterPreviewReply = { rows, okCount, problemCount: rows.length - okCount };
+    res.json(reply);
+  });
+
+  router.post('/:id/roster/import', admin, async (req, res) => {
+    const id = classId(req);
+    const { rows } = parseBody(RosterImportInput, req);
+    res.json({ results: await inviteToClass(id, rows, currentUser(req), mailDeps(deps), 'roster file') });
+  });
+
+  return router;
+}
+
+/** Mounted at /invitations: the admin's pending list and actions, and the two public routes behind a link. */
+export function invitationsRouter(deps: InvitationDeps) {
+  const router = Router();
+  const admin = requireRole('admin');
+  const limited = (limit: number) =>
+    rateLimit({
+      windowMs: 15 * 60 * 1000,
+      limit,
+      standardHeaders: false,
+      legacyHeaders: false,
+      handler: (_req, res, next) => {
+        res.setHeader('Retry-After', String(15 * 60));
+        next(new AppError('TOO_MANY_ATTEMPTS', 'Too many attempts with invitation links. Wait 15 minutes and try again.', 429));
+      },
+    });
+  // Tokens are unguessable; the limits stop a script from trying, and keep bcrypt work per client bounded.
+  const lookLimit = limited(60);
+  const acceptLimit = limited(20);
+
+  router.get('/', admin, async (req, res) => {
+    res.json({ invitations: await listPendingInvitations(parseQuery(InvitationListQuery, req).classId) });
+  });
+
+  router.post('/:id/resend', admin, async (req, res) => {
+    res.json(await resendInvitation(idParam(req), currentUser(req), mailDeps(deps)));
+  });
+
+  router.post('/:id/revoke', admin, async (req, res) => {
+    await revokeInvitation(idParam(req), currentUser(req));
+    res.status(204).end();
+  });
+
+  router.get('/:token', lookLimit, async (req, res) => {
+    res.json(await previewInvitation(String(req.params.token)));
+  });
+
+  router.post('/:token/accept', acceptLimit, async (req, res) => {
+    const input = parseBody(AcceptInvitationInput, req);
+    const user = await acceptInvitation(String(req.params.token), input);
+    // A fresh session for the new account, as at sign-in.
+    await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+    await new Promise<void>((resolve, reject) => req.login(user, (err) => (err ? reject(err) : resolve())));
+    res.status(201).json({ user });
+  });
+
+  return router;
+}
