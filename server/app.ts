@@ -5,13 +5,16 @@ import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config/env';
 import { auditRouter } from './features/audit/audit.router';
+import { accountRouter } from './features/auth/account.router';
 import { authRouter } from './features/auth/auth.router';
+import { devMailRouter } from './features/auth/dev-mail.router';
 import { originCheck } from './features/auth/origin-check';
 import { sessionMiddleware } from './features/auth/session';
 import { calculationsRouter } from './features/calculations/calculations.router';
 import { classesRouter } from './features/classes/classes.router';
 import { invitationsRouter } from './features/classes/invitations.router';
 import { healthRouter } from './features/health/health.router';
+import { usersRouter } from './features/users/users.router';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import type { Logger } from './lib/logger';
 import type { Mailer } from './lib/mailer';
@@ -23,6 +26,8 @@ export interface AppDeps {
   logger: Logger;
   /** Folder of the built client; when absent (tests, `npm run dev`) only the API is served. */
   clientDir?: string;
+  /** Inbox page of the local fake mail service when it was started (no SMTP_URL), shown to the admin. */
+  devMailInbox?: string | null;
 }
 
 /** Builds the Express app without listening, so tests drive it directly with supertest. */
@@ -57,9 +62,12 @@ export function createApp(deps: AppDeps) {
   api.use('/health', healthRouter(sequelize));
   api.use(sessionMiddleware(sequelize, config).handlers);
   api.use(originCheck(config.appUrl));
-  api.use('/auth', authRouter());
+  api.use('/auth', authRouter({ mailer: deps.mailer, appUrl: config.appUrl }));
   // Feature routers are mounted here, one line each.
   api.use('/calculations', calculationsRouter());
+  api.use('/account', accountRouter());
+  api.use('/users', usersRouter());
+  api.use('/dev-mail', devMailRouter(deps.devMailInbox ?? null));
   api.use('/classes', classesRouter(deps));
   api.use('/invitations', invitationsRouter(deps));
   api.use('/audit', auditRouter());

@@ -26,6 +26,7 @@ const app = createApp({
   config,
   logger,
   mailer: createMailer(config),
+  devMailInbox: inbox,
   clientDir: existsSync(path.join(CLIENT_DIR, 'index.html')) ? CLIENT_DIR : undefined,
 });
 const server = app.listen(config.port, () => {

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { initAuditModel } from '../features/audit/audit-event.model';
+import { PasswordReset } from '../features/auth/password-reset.model';
 import { Session } from '../features/auth/session.model';
 import { User } from '../features/auth/user.model';
 import { Calculation } from '../features/calculations/calculation.model';
@@ -11,6 +12,7 @@ import { initCourseModels } from '../features/courses/course.model';
 export function initModels(sequelize: Sequelize) {
   User.initModel(sequelize);
   Session.initModel(sequelize);
+  PasswordReset.initModel(sequelize);
   initCourseModels(sequelize);
   initClassModels(sequelize);
   initInvitationModel(sequelize);

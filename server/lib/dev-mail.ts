@@ -9,7 +9,7 @@ export async function startDevMailServer(config: Config): Promise<string | null>
     web: config.devMailWebPort,
     ip: '127.0.0.1',
     webIp: '127.0.0.1',
-    log: { silent: true, verbose: false, logMailContents: false },
+    silent: true,
   });
   await maildev.start();
   return devMailInboxUrl(config);

@@ -1,14 +1,24 @@
 import { Router, type Request } from 'express';
 import passport from 'passport';
-import { LoginInput, type UserDTO } from '@shared/schemas/user';
+import { z } from 'zod';
+import { LoginInput, PasswordResetInput, PasswordResetRequest, type UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
+import type { Mailer } from '../../lib/mailer';
 import { parseBody } from '../../lib/validate';
 import { requireAuth, currentUser } from './guards';
+import { requestPasswordReset, resetLinkGone, resetPassword } from './password-reset.service';
+import { signInLimits } from './sign-in-limits';
 
-export function authRouter() {
+const RESET_REQUESTED = {
+  message:
+    'If that address belongs to an active account, an e-mail with a link to set a new password is on its way. The link works for one hour.',
+};
+const ResetToken = z.string().min(1).max(200);
+
+export function authRouter(deps: { mailer: Mailer; appUrl: string }) {
   const router = Router();
 
-  router.post('/login', async (req, res) => {
+  router.post('/login', ...signInLimits(), async (req, res) => {
     const input = parseBody(LoginInput, req);
     req.body = input;
     const user = await authenticate(req);
@@ -27,6 +37,22 @@ export function authRouter() {
     await new Promise<void>((resolve, reject) => req.logout((err) => (err ? reject(err) : resolve())));
     await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
     res.clearCookie('tickwright.sid');
+    res.status(204).end();
+  });
+
+  router.post('/password-reset', async (req, res) => {
+    const { email } = parseBody(PasswordResetRequest, req);
+    // Answered before the lookup and the e-mail, so that neither the reply nor its timing tells whether the
+    // address has an account. A failure afterwards still reaches the error handler, which logs it.
+    res.status(202).json(RESET_REQUESTED);
+    await requestPasswordReset(email, deps.mailer, deps.appUrl);
+  });
+
+  router.post('/password-reset/:token', async (req, res) => {
+    const { password } = parseBody(PasswordResetInput, req);
+    const token = ResetToken.safeParse(req.params.token);
+    if (!token.success) throw resetLinkGone();
+    await resetPassword(token.data, password);
     res.status(204).end();
   });
 

@@ -17,7 +17,7 @@ export function sessionMiddleware(sequelize: Sequelize, config: Config) {
     checkExpirationInterval: 15 * 60 * 1000,
     expiration: TWO_WEEKS_MS,
     // The user id is kept in its own column so that a user's sessions can be ended together.
-    extendDefaultFields: (defaults: Record<string, unknown>, sess: { passport?: { user?: number } }) => ({
+    extendDefaultFields: (defaults: { data: string; expires: Date }, sess: { passport?: { user?: number } }) => ({
       data: defaults.data,
       expires: defaults.expires,
       userId: sess.passport?.user ?? null,

@@ -1,0 +1,63 @@
+import { createHash, randomBytes } from 'node:crypto';
+import { AppError } from '../../lib/app-error';
+import type { Mailer } from '../../lib/mailer';
+import { endSessions } from './auth.service';
+import { hashPassword } from './passwords';
+import { PasswordReset } from './password-reset.model';
+import { User } from './user.model';
+
+const VALID_FOR_MS = 60 * 60 * 1000;
+
+const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
+
+export const resetLinkGone = () =>
+  new AppError(
+    'RESET_LINK_GONE',
+    'This link has already been used or is more than an hour old. Ask for a new one from the sign-in page.',
+    410,
+  );
+
+/** Does nothing visible for an unknown or deactivated address: the caller answers the same either way. */
+export async function requestPasswordReset(email: string, mailer: Mailer, appUrl: string): Promise<void> {
+  const user = await User.findOne({ where: { email } });
+  if (!user?.active) return;
+  const token = randomBytes(32).toString('base64url');
+  await PasswordReset.create({
+    userId: user.id,
+    tokenHash: hashToken(token),
+    expiresAt: new Date(Date.now() + VALID_FOR_MS),
+    usedAt: null,
+  });
+  await mailer.send({
+    to: user.email,
+    subject: 'Set a new Tickwright password',
+    text: [
+      `Hello ${user.name},`,
+      '',
+      'Someone asked to set a new password for your Tickwright account. If it was you, open this link within one hour:',
+      '',
+      `${appUrl}/reset-password/${token}`,
+      '',
+      'The link works once. If you did not ask for it, you can ignore this e-mail: your password stays as it is.',
+      '',
+      'Tickwright',
+    ].join('\n'),
+  });
+}
+
+/** Sets the new password, spends the token and every other open one of the user, and ends all their sessions. */
+export async function resetPassword(token: string, password: string): Promise<void> {
+  const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) } });
+  const user = reset ? await User.findByPk(reset.userId) : null;
+  if (!reset || !user?.active || reset.usedAt || reset.expiresAt.getTime() <= Date.now()) throw resetLinkGone();
+  const passwordHash = await hashPassword(password);
+  await User.sequelize!.transaction(async (transaction) => {
+    const usedAt = new Date();
+    // Claimed with a conditional update, so two requests racing with one link cannot both succeed.
+    const [claimed] = await PasswordReset.update({ usedAt }, { where: { id: reset.id, usedAt: null }, transaction });
+    if (claimed === 0) throw resetLinkGone();
+    await PasswordReset.update({ usedAt }, { where: { userId: user.id, usedAt: null }, transaction });
+    await user.update({ passwordHash }, { transaction });
+  });
+  await endSessions(user.id);
+}
