@@ -76,14 +76,23 @@ describe('who may use each class route', () => {
 
   it('when each role creates a class, then only the admin’s is stored', async () => {
     const before = await GuildClass.count();
-    const body = { name: 'Winter Bench 2027', courseId: await courseId(), startsOn: '2027-01-04', endsOn: '2027-02-26', capacity: 6 };
+    const body = {
+      name: 'Winter Bench 2027',
+      courseId: await courseId(),
+      startsOn: '2027-01-04',
+      endsOn: '2027-02-26',
+      capacity: 6,
+    };
     await expectStatuses((who) => agentOf(who).post('/api/classes').send(body), adminOnly(201));
     expect(await GuildClass.count()).toBe(before + 1);
   });
 
   it('when each role edits the class, then only the admin’s change is made', async () => {
     await expectStatuses(
-      (who) => agentOf(who).patch(`/api/classes/${cast.cls.id}`).send({ name: `Renamed by ${who}` }),
+      (who) =>
+        agentOf(who)
+          .patch(`/api/classes/${cast.cls.id}`)
+          .send({ name: `Renamed by ${who}` }),
       adminOnly(200),
     );
     expect((await GuildClass.findByPk(cast.cls.id))!.name).toBe('Renamed by admin');
@@ -92,14 +101,21 @@ describe('who may use each class route', () => {
   it('when each role withdraws and re-enrols an apprentice, then only the admin can', async () => {
     const url = (a: string) => `/api/classes/${cast.cls.id}/enrolments/${cast.apprenticeIn.user.id}/${a}`;
     await expectStatuses((who) => agentOf(who).post(url('withdraw')), adminOnly(200));
-    expect((await Enrolment.findOne({ where: { classId: cast.cls.id, userId: cast.apprenticeIn.user.id } }))!.status).toBe('withdrawn');
+    expect(
+      (await Enrolment.findOne({ where: { classId: cast.cls.id, userId: cast.apprenticeIn.user.id } }))!.status,
+    ).toBe('withdrawn');
     await expectStatuses((who) => agentOf(who).post(url('reenrol')), adminOnly(200));
-    expect((await Enrolment.findOne({ where: { classId: cast.cls.id, userId: cast.apprenticeIn.user.id } }))!.status).toBe('active');
+    expect(
+      (await Enrolment.findOne({ where: { classId: cast.cls.id, userId: cast.apprenticeIn.user.id } }))!.status,
+    ).toBe('active');
   });
 
   it('when each role invites by e-mail, then only the admin’s invitation is stored', async () => {
     await expectStatuses(
-      (who) => agentOf(who).post(`/api/classes/${cast.cls.id}/invitations`).send({ emails: [`by-${who}@example.test`] }),
+      (who) =>
+        agentOf(who)
+          .post(`/api/classes/${cast.cls.id}/invitations`)
+          .send({ emails: [`by-${who}@example.test`] }),
       adminOnly(200),
     );
     const rows = await Invitation.findAll({ where: { classId: cast.cls.id } });
@@ -124,7 +140,14 @@ describe('who may use each class route', () => {
 
   it('when each role lists, resends or revokes invitations, then only the admin can', async () => {
     const { tokenHash, expiresAt } = newInvitationToken();
-    const inv = await Invitation.create({ classId: cast.cls.id, email: 'kept@example.test', name: null, tokenHash, expiresAt, invitedById: null });
+    const inv = await Invitation.create({
+      classId: cast.cls.id,
+      email: 'kept@example.test',
+      name: null,
+      tokenHash,
+      expiresAt,
+      invitedById: null,
+    });
     await expectStatuses((who) => agentOf(who).get('/api/invitations'), adminOnly(200));
     await expectStatuses((who) => agentOf(who).post(`/api/invitations/${inv.id}/resend`), adminOnly(200));
     await expectStatuses((who) => agentOf(who).post(`/api/invitations/${inv.id}/revoke`), adminOnly(204));

@@ -6,14 +6,24 @@ const id = { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true };
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('invitations', {
     id,
-    classId: { type: DataTypes.INTEGER, allowNull: false, references: { model: 'classes', key: 'id' }, onDelete: 'CASCADE' },
+    classId: {
+      type: DataTypes.INTEGER,
+      allowNull: false,
+      references: { model: 'classes', key: 'id' },
+      onDelete: 'CASCADE',
+    },
     email: { type: DataTypes.STRING, allowNull: false },
     name: { type: DataTypes.STRING, allowNull: true },
     tokenHash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
     expiresAt: { type: DataTypes.DATE, allowNull: false },
     acceptedAt: { type: DataTypes.DATE, allowNull: true },
     revokedAt: { type: DataTypes.DATE, allowNull: true },
-    invitedById: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+    invitedById: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
+    },
     createdAt: { type: DataTypes.DATE, allowNull: false },
     updatedAt: { type: DataTypes.DATE, allowNull: false },
   });
@@ -23,7 +33,12 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('audit_events', {
     id,
     // Kept when the actor's account is gone, so the record still says that someone acted.
-    actorId: { type: DataTypes.INTEGER, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+    actorId: {
+      type: DataTypes.INTEGER,
+      allowNull: true,
+      references: { model: 'users', key: 'id' },
+      onDelete: 'SET NULL',
+    },
     action: { type: DataTypes.STRING, allowNull: false },
     targetType: { type: DataTypes.STRING, allowNull: false },
     targetId: { type: DataTypes.INTEGER, allowNull: false },

@@ -1,5 +1,11 @@
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
-import { AUDIT_PAGE_SIZE, type AuditAction, type AuditPage, type AuditQuery, type AuditTargetType } from '@shared/schemas/audit';
+import {
+  AUDIT_PAGE_SIZE,
+  type AuditAction,
+  type AuditPage,
+  type AuditQuery,
+  type AuditTargetType,
+} from '@shared/schemas/audit';
 import { User } from '../auth/user.model';
 import { AuditEvent } from './audit-event.model';
 
@@ -46,8 +52,16 @@ export async function listAudit(query: AuditQuery): Promise<AuditPage> {
     limit: AUDIT_PAGE_SIZE,
     offset: (query.page - 1) * AUDIT_PAGE_SIZE,
   });
-  const actorIds = await AuditEvent.findAll({ attributes: ['actorId'], group: ['actorId'], where: { actorId: { [Op.ne]: null } } });
-  const people = await User.findAll({ where: { id: actorIds.map((a) => a.actorId!) }, attributes: ['id', 'name'], order: [['name', 'ASC']] });
+  const actorIds = await AuditEvent.findAll({
+    attributes: ['actorId'],
+    group: ['actorId'],
+    where: { actorId: { [Op.ne]: null } },
+  });
+  const people = await User.findAll({
+    where: { id: actorIds.map((a) => a.actorId!) },
+    attributes: ['id', 'name'],
+    order: [['name', 'ASC']],
+  });
   const names = new Map(people.map((p) => [p.id, p.name]));
 
   return {

@@ -6,7 +6,11 @@ import { Invitation } from './invitation.model';
 type Tally = Omit<ClassCounts, 'seatsLeft'>;
 
 /** Where an invitation still holds a seat: sent, and not yet accepted, revoked or expired. */
-export const pendingInvitation = (now = new Date()) => ({ acceptedAt: null, revokedAt: null, expiresAt: { [Op.gt]: now } });
+export const pendingInvitation = (now = new Date()) => ({
+  acceptedAt: null,
+  revokedAt: null,
+  expiresAt: { [Op.gt]: now },
+});
 
 /** Enrolments by status and open invitations, per class, in two grouped queries. */
 export async function tallyClasses(classIds: number[], transaction?: Transaction): Promise<Map<number, Tally>> {
@@ -35,4 +39,5 @@ export async function tallyClasses(classIds: number[], transaction?: Transaction
   return tallies;
 }
 
-export const seatsLeft = (cls: Pick<GuildClass, 'capacity'>, tally: Tally) => Math.max(0, cls.capacity - tally.active - tally.invited);
+export const seatsLeft = (cls: Pick<GuildClass, 'capacity'>, tally: Tally) =>
+  Math.max(0, cls.capacity - tally.active - tally.invited);

@@ -1,5 +1,11 @@
 import { Op, type Transaction, type WhereOptions } from 'sequelize';
-import type { ClassCreateInput, ClassDTO, ClassFormOptions, ClassListQuery, ClassUpdateInput } from '@shared/schemas/class';
+import type {
+  ClassCreateInput,
+  ClassDTO,
+  ClassFormOptions,
+  ClassListQuery,
+  ClassUpdateInput,
+} from '@shared/schemas/class';
 import type { UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
 import { recordAudit } from '../audit/audit.service';
@@ -45,7 +51,13 @@ export async function listClasses(viewer: UserDTO, query: ClassListQuery): Promi
   if (visible !== 'all') Object.assign(where, { id: { [Op.in]: visible } });
   if (query.archived === 'true') Object.assign(where, { archivedAt: { [Op.ne]: null } });
   if (query.archived === 'false') Object.assign(where, { archivedAt: null });
-  const classes = await GuildClass.findAll({ where, order: [['startsOn', 'DESC'], ['name', 'ASC']] });
+  const classes = await GuildClass.findAll({
+    where,
+    order: [
+      ['startsOn', 'DESC'],
+      ['name', 'ASC'],
+    ],
+  });
   return toClassDTOs(classes);
 }
 
@@ -55,14 +67,17 @@ export async function getClass(viewer: UserDTO, id: number): Promise<ClassDTO> {
 
 async function checkCourse(courseId: number, transaction: Transaction) {
   const course = await Course.findOne({ where: { id: courseId, retiredAt: null }, transaction });
-  if (!course) throw AppError.badRequest('Some fields need attention.', { courseId: ['Choose one of the courses on offer.'] });
+  if (!course)
+    throw AppError.badRequest('Some fields need attention.', { courseId: ['Choose one of the courses on offer.'] });
 }
 
 async function checkMentors(ids: number[], transaction: Transaction): Promise<User[]> {
   const unique = [...new Set(ids)];
   const mentors = await User.findAll({ where: { id: { [Op.in]: unique }, role: 'mentor', active: true }, transaction });
   if (mentors.length !== unique.length) {
-    throw AppError.badRequest('Some fields need attention.', { mentorIds: ['Only active mentors can be assigned to a class.'] });
+    throw AppError.badRequest('Some fields need attention.', {
+      mentorIds: ['Only active mentors can be assigned to a class.'],
+    });
   }
   return mentors;
 }
@@ -72,7 +87,13 @@ export async function createClass(input: ClassCreateInput, actor: UserDTO): Prom
     await checkCourse(input.courseId, transaction);
     const mentors = await checkMentors(input.mentorIds, transaction);
     const cls = await GuildClass.create(
-      { name: input.name, courseId: input.courseId, startsOn: input.startsOn, endsOn: input.endsOn, capacity: input.capacity },
+      {
+        name: input.name,
+        courseId: input.courseId,
+        startsOn: input.startsOn,
+        endsOn: input.endsOn,
+        capacity: input.capacity,
+      },
       { transaction },
     );
     for (const m of mentors) await ClassMentor.create({ classId: cls.id, userId: m.id }, { transaction });
@@ -80,7 +101,13 @@ export async function createClass(input: ClassCreateInput, actor: UserDTO): Prom
     const { name, courseId, startsOn, endsOn, capacity } = input;
     await recordAudit(actor.id, 'class.created', target, { name, courseId, startsOn, endsOn, capacity }, transaction);
     if (mentors.length) {
-      await recordAudit(actor.id, 'class.mentors-changed', target, { added: mentors.map((m) => m.name), removed: [] }, transaction);
+      await recordAudit(
+        actor.id,
+        'class.mentors-changed',
+        target,
+        { added: mentors.map((m) => m.name), removed: [] },
+        transaction,
+      );
     }
     return toClassDTO(cls, transaction);
   });
@@ -103,8 +130,11 @@ export async function updateClass(id: number, input: ClassUpdateInput, actor: Us
     }
     if (changes.courseId) {
       await checkCourse(input.courseId!, transaction);
-      const people = (await Enrolment.count({ where: { classId: id }, transaction })) + (await Invitation.count({ where: { classId: id }, transaction }));
-      if (people > 0) throw AppError.conflict('The course of a class cannot change once apprentices are enrolled or invited.');
+      const people =
+        (await Enrolment.count({ where: { classId: id }, transaction })) +
+        (await Invitation.count({ where: { classId: id }, transaction }));
+      if (people > 0)
+        throw AppError.conflict('The course of a class cannot change once apprentices are enrolled or invited.');
     }
     if (changes.capacity) {
       const active = await Enrolment.count({ where: { classId: id, status: 'active' }, transaction });
@@ -136,7 +166,8 @@ async function replaceMentors(cls: GuildClass, mentorIds: number[], actor: UserD
   const removedIds = [...currentIds].filter((uid) => !wantedIds.has(uid));
   if (added.length === 0 && removedIds.length === 0) return;
   for (const m of added) await ClassMentor.create({ classId: cls.id, userId: m.id }, { transaction });
-  if (removedIds.length) await ClassMentor.destroy({ where: { classId: cls.id, userId: { [Op.in]: removedIds } }, transaction });
+  if (removedIds.length)
+    await ClassMentor.destroy({ where: { classId: cls.id, userId: { [Op.in]: removedIds } }, transaction });
   const removed = await User.findAll({ where: { id: { [Op.in]: removedIds } }, attributes: ['name'], transaction });
   await recordAudit(
     actor.id,

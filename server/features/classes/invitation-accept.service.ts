@@ -12,7 +12,11 @@ import { hashInvitationToken } from './invitation-token';
 
 /** One answer for unknown, used, revoked and expired links, so a guessed token learns nothing. */
 const gone = () =>
-  new AppError('INVITATION_GONE', 'This invitation link has been used, withdrawn or has run out. Ask the guild office for a new one.', 410);
+  new AppError(
+    'INVITATION_GONE',
+    'This invitation link has been used, withdrawn or has run out. Ask the guild office for a new one.',
+    410,
+  );
 
 const TOKEN = /^[A-Za-z0-9_-]{20,100}$/;
 
@@ -51,11 +55,22 @@ export async function acceptInvitation(token: string, input: AcceptInvitationInp
     );
     if (spent !== 1) throw gone();
     if (await User.findOne({ where: { email: invitation.email }, transaction })) {
-      throw AppError.conflict('An account with this e-mail address already exists. Sign in, and ask the guild office to enrol you.');
+      throw AppError.conflict(
+        'An account with this e-mail address already exists. Sign in, and ask the guild office to enrol you.',
+      );
     }
-    const user = await User.create({ email: invitation.email, name: input.name, role: 'apprentice', passwordHash }, { transaction });
+    const user = await User.create(
+      { email: invitation.email, name: input.name, role: 'apprentice', passwordHash },
+      { transaction },
+    );
     await Enrolment.create({ classId: invitation.classId, userId: user.id }, { transaction });
-    await recordAudit(user.id, 'invitation.accepted', { type: 'invitation', id: invitation.id, label: invitation.email }, { classId: invitation.classId }, transaction);
+    await recordAudit(
+      user.id,
+      'invitation.accepted',
+      { type: 'invitation', id: invitation.id, label: invitation.email },
+      { classId: invitation.classId },
+      transaction,
+    );
     return toUserDTO(user);
   });
 }

@@ -6,9 +6,17 @@ interface ClassInfo {
   courseSlug: string;
 }
 
-const longDate = (d: Date) => d.toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
+const longDate = (d: Date) =>
+  d.toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
-export function invitationMail(appUrl: string, to: string, name: string | null, token: string, expiresAt: Date, c: ClassInfo): OutgoingMail {
+export function invitationMail(
+  appUrl: string,
+  to: string,
+  name: string | null,
+  token: string,
+  expiresAt: Date,
+  c: ClassInfo,
+): OutgoingMail {
   return {
     to,
     subject: `Your invitation to ${c.className} on Tickwright`,

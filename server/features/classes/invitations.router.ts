@@ -15,7 +15,13 @@ import type { Mailer } from '../../lib/mailer';
 import { idParam, parseBody, parseQuery } from '../../lib/validate';
 import { currentUser, requireRole } from '../auth/guards';
 import { acceptInvitation, previewInvitation } from './invitation-accept.service';
-import { inviteToClass, listPendingInvitations, previewInvites, resendInvitation, revokeInvitation } from './invitations.service';
+import {
+  inviteToClass,
+  listPendingInvitations,
+  previewInvites,
+  resendInvitation,
+  revokeInvitation,
+} from './invitations.service';
 import { parseRosterCsv } from './roster-csv';
 
 export interface InvitationDeps {
@@ -28,7 +34,15 @@ const mailDeps = (deps: InvitationDeps) => ({ mailer: deps.mailer, appUrl: deps.
 
 // A roster of 200 people is a few kilobytes; anything near this limit is not a roster.
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 256 * 1024, files: 1 } }).single('file');
-const TEXT_TYPES = new Set(['text/csv', 'text/plain', 'application/csv', 'text/x-csv', 'application/vnd.ms-excel', 'application/octet-stream', '']);
+const TEXT_TYPES = new Set([
+  'text/csv',
+  'text/plain',
+  'application/csv',
+  'text/x-csv',
+  'application/vnd.ms-excel',
+  'application/octet-stream',
+  '',
+]);
 
 /** Mounted inside the classes router: invitations and roster files for one class, admin only. */
 export function classInvitationsRouter(deps: InvitationDeps) {
@@ -51,7 +65,11 @@ export function classInvitationsRouter(deps: InvitationDeps) {
     const id = classId(req);
     if (!req.file) throw AppError.badRequest('Choose a CSV file to upload (field "file").');
     if (!TEXT_TYPES.has(req.file.mimetype)) {
-      throw new AppError('NOT_A_CSV', 'That file is not a CSV roster (a spreadsheet saved as CSV is). Nothing was imported.', 415);
+      throw new AppError(
+        'NOT_A_CSV',
+        'That file is not a CSV roster (a spreadsheet saved as CSV is). Nothing was imported.',
+        415,
+      );
     }
     const rows = await previewInvites(id, parseRosterCsv(req.file.buffer));
     const okCount = rows.filter((r) => r.ok).length;
@@ -80,7 +98,13 @@ export function invitationsRouter(deps: InvitationDeps) {
       legacyHeaders: false,
       handler: (_req, res, next) => {
         res.setHeader('Retry-After', String(15 * 60));
-        next(new AppError('TOO_MANY_ATTEMPTS', 'Too many attempts with invitation links. Wait 15 minutes and try again.', 429));
+        next(
+          new AppError(
+            'TOO_MANY_ATTEMPTS',
+            'Too many attempts with invitation links. Wait 15 minutes and try again.',
+            429,
+          ),
+        );
       },
     });
   // Tokens are unguessable; the limits stop a script from trying, and keep bcrypt work per client bounded.

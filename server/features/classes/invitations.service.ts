@@ -27,7 +27,10 @@ async function openClass(classId: number, transaction?: Transaction) {
   return { cls, info: { className: cls.name, courseTitle: course?.title ?? '', courseSlug: course?.slug ?? '' } };
 }
 
-export async function previewInvites(classId: number, invitees: (Invitee & { line: number })[]): Promise<RosterPreviewRow[]> {
+export async function previewInvites(
+  classId: number,
+  invitees: (Invitee & { line: number })[],
+): Promise<RosterPreviewRow[]> {
   const { cls } = await openClass(classId);
   const plans = await planInvites(cls, invitees);
   return plans.map((p, i) => ({
@@ -57,7 +60,13 @@ export async function inviteToClass(
         const user = plan.user;
         if (plan.enrolment) await plan.enrolment.update({ status: 'active' }, { transaction });
         else await Enrolment.create({ classId, userId: user.id }, { transaction });
-        await recordAudit(actor.id, 'enrolment.added', { type: 'user', id: user.id, label: user.email }, { classId, className: cls.name, source }, transaction);
+        await recordAudit(
+          actor.id,
+          'enrolment.added',
+          { type: 'user', id: user.id, label: user.email },
+          { classId, className: cls.name, source },
+          transaction,
+        );
         outgoing.push(enrolledMail(deps.appUrl, user.email, user.name, info));
       } else if (plan.outcome === 'invited') {
         const { token, tokenHash, expiresAt } = newInvitationToken();
@@ -65,7 +74,13 @@ export async function inviteToClass(
         const invitation = plan.expired
           ? await plan.expired.update(fields, { transaction })
           : await Invitation.create({ classId, email: plan.email, ...fields }, { transaction });
-        await recordAudit(actor.id, 'invitation.sent', { type: 'invitation', id: invitation.id, label: plan.email }, { classId, className: cls.name, source }, transaction);
+        await recordAudit(
+          actor.id,
+          'invitation.sent',
+          { type: 'invitation', id: invitation.id, label: plan.email },
+          { classId, className: cls.name, source },
+          transaction,
+        );
         outgoing.push(invitationMail(deps.appUrl, plan.email, invitation.name, token, expiresAt, info));
       } else outgoing.push(null);
     }
@@ -75,7 +90,12 @@ export async function inviteToClass(
         actor.id,
         'roster.imported',
         { type: 'class', id: cls.id, label: cls.name },
-        { rows: plans.length, invited: count('invited'), enrolled: count('enrolled'), skipped: plans.filter((p) => !isSuccess(p.outcome)).length },
+        {
+          rows: plans.length,
+          invited: count('invited'),
+          enrolled: count('enrolled'),
+          skipped: plans.filter((p) => !isSuccess(p.outcome)).length,
+        },
         transaction,
       );
     }
@@ -108,7 +128,10 @@ export async function listPendingInvitations(classId?: number): Promise<Invitati
     where: { acceptedAt: null, revokedAt: null, ...(classId ? { classId } : {}) },
     order: [['createdAt', 'DESC']],
   });
-  const classes = await GuildClass.findAll({ where: { id: [...new Set(rows.map((r) => r.classId))] }, attributes: ['id', 'name'] });
+  const classes = await GuildClass.findAll({
+    where: { id: [...new Set(rows.map((r) => r.classId))] },
+    attributes: ['id', 'name'],
+  });
   const inviterIds = [...new Set(rows.flatMap((r) => (r.invitedById ? [r.invitedById] : [])))];
   const inviters = await User.findAll({ where: { id: inviterIds }, attributes: ['id', 'name'] });
   const className = new Map(classes.map((c) => [c.id, c.name]));
@@ -140,7 +163,13 @@ export async function resendInvitation(id: number, actor: UserDTO, deps: MailDep
     const { info } = await openClass(invitation.classId, transaction);
     const { token, tokenHash, expiresAt } = newInvitationToken();
     await invitation.update({ tokenHash, expiresAt, invitedById: actor.id }, { transaction });
-    await recordAudit(actor.id, 'invitation.resent', { type: 'invitation', id, label: invitation.email }, { classId: invitation.classId, className: info.className }, transaction);
+    await recordAudit(
+      actor.id,
+      'invitation.resent',
+      { type: 'invitation', id, label: invitation.email },
+      { classId: invitation.classId, className: info.className },
+      transaction,
+    );
     return invitationMail(deps.appUrl, invitation.email, invitation.name, token, expiresAt, info);
   });
   return { mailed: await sendQuietly(deps, mail) };
@@ -151,6 +180,12 @@ export async function revokeInvitation(id: number, actor: UserDTO): Promise<void
     const invitation = await findPending(id, transaction);
     await invitation.update({ revokedAt: new Date() }, { transaction });
     const cls = await GuildClass.findByPk(invitation.classId, { attributes: ['name'], transaction });
-    await recordAudit(actor.id, 'invitation.revoked', { type: 'invitation', id, label: invitation.email }, { classId: invitation.classId, className: cls?.name }, transaction);
+    await recordAudit(
+      actor.id,
+      'invitation.revoked',
+      { type: 'invitation', id, label: invitation.email },
+      { classId: invitation.classId, className: cls?.name },
+      transaction,
+    );
   });
 }

@@ -30,10 +30,16 @@ export async function planInvites(cls: GuildClass, invitees: Invitee[], transact
   const emails = [...new Set(parsed.flatMap((p) => (p.valid.success ? [p.valid.data] : [])))];
   const [users, invitations, tally] = await Promise.all([
     User.findAll({ where: { email: { [Op.in]: emails } }, transaction }),
-    Invitation.findAll({ where: { classId: cls.id, email: { [Op.in]: emails }, acceptedAt: null, revokedAt: null }, transaction }),
+    Invitation.findAll({
+      where: { classId: cls.id, email: { [Op.in]: emails }, acceptedAt: null, revokedAt: null },
+      transaction,
+    }),
     tallyClasses([cls.id], transaction).then((m) => m.get(cls.id)!),
   ]);
-  const enrolments = await Enrolment.findAll({ where: { classId: cls.id, userId: { [Op.in]: users.map((u) => u.id) } }, transaction });
+  const enrolments = await Enrolment.findAll({
+    where: { classId: cls.id, userId: { [Op.in]: users.map((u) => u.id) } },
+    transaction,
+  });
   const userByEmail = new Map(users.map((u) => [u.email, u]));
   const enrolmentByUser = new Map(enrolments.map((e) => [e.userId, e]));
   const now = new Date();
@@ -72,10 +78,16 @@ const MESSAGES: Record<InviteOutcome, [done: string, planned: string]> = {
   'bad-address': ['Not a valid e-mail address.', 'Not a valid e-mail address.'],
   duplicate: ['Listed more than once; invited once.', 'Duplicate: this address is listed earlier.'],
   'already-enrolled': ['Already enrolled in this class.', 'Already enrolled in this class.'],
-  'already-invited': ['Already invited; resend from the pending invitations if needed.', 'Already invited and not yet accepted.'],
+  'already-invited': [
+    'Already invited; resend from the pending invitations if needed.',
+    'Already invited and not yet accepted.',
+  ],
   'class-full': ['The class is full.', 'The class would be full.'],
   'not-an-apprentice': ['This account belongs to a mentor or admin.', 'This account belongs to a mentor or admin.'],
-  'account-inactive': ['This account is deactivated; reactivate it first.', 'This account is deactivated; reactivate it first.'],
+  'account-inactive': [
+    'This account is deactivated; reactivate it first.',
+    'This account is deactivated; reactivate it first.',
+  ],
 };
 
 export const outcomeMessage = (outcome: InviteOutcome, planned = false) => MESSAGES[outcome][planned ? 1 : 0];

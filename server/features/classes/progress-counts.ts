@@ -12,7 +12,11 @@ export interface CourseProgress {
  * tables; they are read here by name, and only when they (and the columns used) exist, so the roster works whether
  * or not those features are installed.
  */
-export async function courseProgress(sequelize: Sequelize, courseId: number, userIds: number[]): Promise<CourseProgress> {
+export async function courseProgress(
+  sequelize: Sequelize,
+  courseId: number,
+  userIds: number[],
+): Promise<CourseProgress> {
   const [lessons] = await sequelize.query<{ n: number }>(
     'SELECT COUNT(*) AS n FROM lessons WHERE courseId = :courseId AND retiredAt IS NULL',
     { replacements: { courseId }, type: QueryTypes.SELECT },

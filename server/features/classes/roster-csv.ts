@@ -45,11 +45,15 @@ export function parseRosterCsv(bytes: Buffer): RosterFileRow[] {
   const nameAt = columns?.indexOf('name') ?? -1;
   const emailAt = columns?.indexOf('email') ?? -1;
   if (nameAt < 0 || emailAt < 0) {
-    throw AppError.badRequest('The first row of the file must name the columns "name" and "e-mail" (comma- or semicolon-separated).');
+    throw AppError.badRequest(
+      'The first row of the file must name the columns "name" and "e-mail" (comma- or semicolon-separated).',
+    );
   }
   if (filled.length === 0) throw AppError.badRequest('The file has a header row but no people under it.');
   if (filled.length > MAX_INVITES_PER_REQUEST) {
-    throw AppError.badRequest(`A roster file can hold at most ${MAX_INVITES_PER_REQUEST} people; split it into smaller files.`);
+    throw AppError.badRequest(
+      `A roster file can hold at most ${MAX_INVITES_PER_REQUEST} people; split it into smaller files.`,
+    );
   }
   return filled.map((l) => ({ line: l.line, name: l.cells[nameAt] ?? '', email: l.cells[emailAt] ?? '' }));
 }

@@ -16,8 +16,15 @@ export async function getRoster(viewer: UserDTO, classId: number): Promise<Roste
   const enrolments = await Enrolment.findAll({ where: { classId }, order: [['createdAt', 'ASC']] });
   const users = await User.findAll({ where: { id: { [Op.in]: enrolments.map((e) => e.userId) } } });
   const userById = new Map(users.map((u) => [u.id, u]));
-  const progress = await courseProgress(GuildClass.sequelize!, cls.courseId, users.map((u) => u.id));
-  const invitations = await Invitation.findAll({ where: { classId, ...pendingInvitation() }, order: [['createdAt', 'ASC']] });
+  const progress = await courseProgress(
+    GuildClass.sequelize!,
+    cls.courseId,
+    users.map((u) => u.id),
+  );
+  const invitations = await Invitation.findAll({
+    where: { classId, ...pendingInvitation() },
+    order: [['createdAt', 'ASC']],
+  });
 
   const enrolled: RosterEntry[] = enrolments.map((e) => {
     const user = userById.get(e.userId);
@@ -43,7 +50,9 @@ export async function getRoster(viewer: UserDTO, classId: number): Promise<Roste
     since: i.createdAt.toISOString(),
   }));
   const order = { active: 0, invited: 1, withdrawn: 2 } as const;
-  const entries = [...enrolled, ...invited].sort((a, b) => order[a.status] - order[b.status] || a.name.localeCompare(b.name));
+  const entries = [...enrolled, ...invited].sort(
+    (a, b) => order[a.status] - order[b.status] || a.name.localeCompare(b.name),
+  );
   return { classId, lessonsTotal: progress.lessonsTotal, projectsTotal: progress.projectsTotal, entries };
 }
 
@@ -51,7 +60,12 @@ export async function getRoster(viewer: UserDTO, classId: number): Promise<Roste
  * Withdrawing only marks the enrolment: the apprentice's lessons, log entries and submissions stay, and
  * re-enrolling brings them back into view. Doing either twice changes nothing and records nothing.
  */
-export async function setEnrolmentStatus(classId: number, userId: number, status: 'active' | 'withdrawn', actor: UserDTO) {
+export async function setEnrolmentStatus(
+  classId: number,
+  userId: number,
+  status: 'active' | 'withdrawn',
+  actor: UserDTO,
+) {
   await GuildClass.sequelize!.transaction(async (transaction) => {
     const cls = await GuildClass.findByPk(classId, { transaction });
     const enrolment = cls && (await Enrolment.findOne({ where: { classId, userId }, transaction }));
@@ -60,7 +74,8 @@ export async function setEnrolmentStatus(classId: number, userId: number, status
     if (status === 'active') {
       if (cls.archivedAt) throw AppError.conflict('This class is archived; bring it back before re-enrolling anyone.');
       const tally = (await tallyClasses([classId], transaction)).get(classId)!;
-      if (seatsLeft(cls, tally) === 0) throw AppError.conflict('The class is full: raise its capacity or withdraw someone first.');
+      if (seatsLeft(cls, tally) === 0)
+        throw AppError.conflict('The class is full: raise its capacity or withdraw someone first.');
     }
     await enrolment.update({ status }, { transaction });
     const user = await User.findByPk(userId, { transaction });

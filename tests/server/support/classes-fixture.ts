@@ -12,7 +12,13 @@ export async function courseId(slug = COURSE_SLUG): Promise<number> {
 
 /** A class made straight in the database, with an optional mentor and apprentices. */
 export async function makeClass(
-  fields: Partial<{ name: string; capacity: number; mentorIds: number[]; apprenticeIds: number[]; archived: boolean }> = {},
+  fields: Partial<{
+    name: string;
+    capacity: number;
+    mentorIds: number[];
+    apprenticeIds: number[];
+    archived: boolean;
+  }> = {},
 ) {
   const cls = await GuildClass.create({
     name: fields.name ?? `Test Bench ${Math.random().toString(36).slice(2, 7)}`,
