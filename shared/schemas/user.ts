@@ -65,3 +65,9 @@ export type UserListReply = z.infer<typeof UserListReply>;
 
 export const DevMailReply = z.object({ inboxUrl: z.string().nullable() });
 export type DevMailReply = z.infer<typeof DevMailReply>;
+
+/** The guild office's changes to an account: its role, and whether it may sign in at all. */
+export const UserUpdateInput = z
+  .object({ role: Role.optional(), active: z.boolean().optional() })
+  .refine((v) => v.role !== undefined || v.active !== undefined, 'Give a role or an active flag to change.');
+export type UserUpdateInput = z.infer<typeof UserUpdateInput>;
