@@ -13,6 +13,9 @@ import { sessionMiddleware } from './features/auth/session';
 import { calculationsRouter } from './features/calculations/calculations.router';
 import { classesRouter } from './features/classes/classes.router';
 import { invitationsRouter } from './features/classes/invitations.router';
+import { contentImagesRouter } from './features/courses/content-images.router';
+import { coursesRouter, lessonsRouter } from './features/courses/courses.router';
+import { searchRouter } from './features/courses/search.router';
 import { healthRouter } from './features/health/health.router';
 import { usersRouter } from './features/users/users.router';
 import { apiNotFound, errorHandler } from './lib/error-handler';
@@ -64,6 +67,10 @@ export function createApp(deps: AppDeps) {
   api.use(originCheck(config.appUrl));
   api.use('/auth', authRouter({ mailer: deps.mailer, appUrl: config.appUrl }));
   // Feature routers are mounted here, one line each.
+  api.use('/courses', coursesRouter());
+  api.use('/lessons', lessonsRouter());
+  api.use('/search', searchRouter(sequelize));
+  api.use('/content', contentImagesRouter());
   api.use('/calculations', calculationsRouter());
   api.use('/account', accountRouter());
   api.use('/users', usersRouter());

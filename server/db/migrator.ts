@@ -1,6 +1,7 @@
 import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as m0001 from './migrations/0001-core';
+import * as m0003 from './migrations/0003-lesson-progress';
 import * as m0002 from './migrations/0002-password-resets';
 import * as m0004 from './migrations/0004-calculations';
 import * as m0007 from './migrations/0007-invitations-audit';
@@ -13,6 +14,7 @@ export type Migration = {
 /** Listed here rather than globbed, so the same list works under tsx, vitest and a bundled build. */
 const migrations: Record<string, Migration> = {
   '0001-core': m0001,
+  '0003-lesson-progress': m0003,
   '0002-password-resets': m0002,
   '0004-calculations': m0004,
   '0007-invitations-audit': m0007,

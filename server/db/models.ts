@@ -7,6 +7,7 @@ import { Calculation } from '../features/calculations/calculation.model';
 import { initClassModels } from '../features/classes/class.model';
 import { initInvitationModel } from '../features/classes/invitation.model';
 import { initCourseModels } from '../features/courses/course.model';
+import { initLessonProgressModel } from '../features/courses/lesson-progress.model';
 
 /** Every model is initialised here, once per Sequelize instance; each feature registers its own in one line. */
 export function initModels(sequelize: Sequelize) {
@@ -14,6 +15,7 @@ export function initModels(sequelize: Sequelize) {
   Session.initModel(sequelize);
   PasswordReset.initModel(sequelize);
   initCourseModels(sequelize);
+  initLessonProgressModel(sequelize);
   initClassModels(sequelize);
   initInvitationModel(sequelize);
   initAuditModel(sequelize);

@@ -23,6 +23,7 @@ export interface LoadedCourse {
   dir: string;
   meta: CourseMeta;
   intro: string;
+  introLineOffset: number;
   lessons: LoadedLesson[];
 }
 
@@ -67,7 +68,13 @@ export function loadContent(root: string): { courses: LoadedCourse[]; problems: 
       }
       lessons.push({ file, slug: match[2], position: Number(match[1]), ...lesson });
     }
-    courses.push({ dir: path.join(root, dir), meta: course.meta, intro: course.body, lessons });
+    courses.push({
+      dir: path.join(root, dir),
+      meta: course.meta,
+      intro: course.body,
+      introLineOffset: course.bodyLineOffset,
+      lessons,
+    });
   }
   return { courses, problems };
 }
@@ -101,6 +108,8 @@ function readFront<T>(
     return null;
   }
   const raw = readFileSync(file, 'utf8');
-  const bodyLineOffset = raw.slice(0, raw.length - parsed.content.length).split('\n').length - 1;
+  // The body is trimmed, so blank lines before it count towards the offset too.
+  const leading = parsed.content.length - parsed.content.trimStart().length;
+  const bodyLineOffset = raw.slice(0, raw.length - parsed.content.length + leading).split('\n').length - 1;
   return { meta: result.data, body: parsed.content.trim(), bodyLineOffset };
 }

@@ -2,6 +2,7 @@ import { Op, type Sequelize } from 'sequelize';
 import type { Logger } from '../../lib/logger';
 import { Course, Lesson, Project } from './course.model';
 import { loadContent } from './content-loader';
+import { markSearchStale } from './lesson-search';
 
 /**
  * Brings the database in line with content/: rows are matched by slug so ids stay stable across restarts,
@@ -61,4 +62,5 @@ export async function syncContent(sequelize: Sequelize, root: string, logger?: L
     }
     await Course.update({ retiredAt: now }, { where: { id: { [Op.notIn]: keptCourseIds }, retiredAt: null } });
   });
+  markSearchStale(sequelize);
 }

@@ -1,0 +1,17 @@
+import { Router } from 'express';
+import type { Sequelize } from 'sequelize';
+import { SearchQuery } from '@shared/schemas/course';
+import { parseQuery } from '../../lib/validate';
+import { requireAuth } from '../auth/guards';
+import { searchLessons, warmSearchIndex } from './lesson-search';
+
+/** Mounted at /api/search: ranked lessons with a snippet and the words that matched. */
+export function searchRouter(sequelize: Sequelize) {
+  warmSearchIndex(sequelize);
+  const router = Router();
+  router.get('/', requireAuth, async (req, res) => {
+    const { q } = parseQuery(SearchQuery, req);
+    res.json({ query: q, results: await searchLessons(sequelize, q) });
+  });
+  return router;
+}
