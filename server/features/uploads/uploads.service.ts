@@ -1,0 +1,127 @@
+import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import type { UploadDTO } from '@shared/schemas/upload';
+import type { UserDTO } from '@shared/schemas/user';
+import { AppError } from '../../lib/app-error';
+import { canSeeApprentice } from '../classes/access';
+import { processImage } from './image-pipeline';
+import { newFileKey, removeUploadFiles, writeUploadFiles } from './upload-files';
+import { Upload } from './upload.model';
+import { withImageSlot } from './image-slots';
+
+export const uploadDTO = (u: Pick<Upload, 'id' | 'width' | 'height'>): UploadDTO => ({
+  id: u.id,
+  width: u.width,
+  height: u.height,
+  url: `/api/uploads/${u.id}`,
+  viewUrl: `/api/uploads/${u.id}?size=view`,
+  thumbUrl: `/api/uploads/${u.id}?size=thumb`,
+});
+
+/** Re-encodes and stores a photo; if anything fails, no file and no row remain. */
+export async function storeUpload(dataDir: string, ownerId: number, bytes: Buffer): Promise<UploadDTO> {
+  const image = await withImageSlot(() => processImage(bytes));
+  const fileKey = newFileKey();
+  await writeUploadFiles(dataDir, fileKey, image.files);
+  try {
+    const upload = await Upload.create({
+      ownerId,
+      fileKey,
+      width: image.width,
+      height: image.height,
+      bytes: image.files.full.length,
+      sourceType: image.sourceType,
+    });
+    return uploadDTO(upload);
+  } catch (err) {
+    await removeUploadFiles(dataDir, fileKey);
+    throw err;
+  }
+}
+
+/**
+ * For any feature that attaches photos (submissions, the bench log): throws 400 naming `uploadIds` unless every id is
+ * an upload of this user, and marks them as taken so the sweep of abandoned uploads keeps them. Inside a transaction,
+ * pass it: SQLite gives a transaction its own connection, and a query outside it would wait on its lock.
+ */
+export async function assertOwnUploads(userId: number, ids: number[], options: { transaction?: Transaction } = {}) {
+  const unique = [...new Set(ids)];
+  if (unique.length === 0) return;
+  const { transaction } = options;
+  const mine = await Upload.findAll({
+    where: { id: { [Op.in]: unique }, ownerId: userId },
+    attributes: ['id'],
+    transaction,
+  });
+  if (mine.length !== unique.length) {
+    const found = new Set(mine.map((u) => u.id));
+    const bad = unique.filter((id) => !found.has(id));
+    throw AppError.badRequest('Some photos could not be found among your uploads.', {
+      uploadIds: [`Not one of your uploads: ${bad.join(', ')}.`],
+    });
+  }
+  await Upload.update({ claimedAt: new Date() }, { where: { id: { [Op.in]: unique }, claimedAt: null }, transaction });
+}
+
+/** The owner, the mentors of the owner's classes and the admin may see a photo; anyone else is told it does not exist. */
+export async function findViewableUpload(viewer: UserDTO, id: number): Promise<Upload> {
+  const upload = id > 0 ? await Upload.findByPk(id) : null;
+  if (!upload || !(viewer.id === upload.ownerId || (await canSeeApprentice(viewer, upload.ownerId)))) {
+    throw AppError.notFound('That photo');
+  }
+  return upload;
+}
+
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+/**
+ * Removes photos that were uploaded but never attached to anything within a day (a form closed before saving).
+ * Besides the claim mark, any row in a table with a foreign key to uploads keeps a photo, as a second guard.
+ */
+export async function sweepAbandonedUploads(
+  sequelize: Sequelize,
+  dataDir: string,
+  olderThanMs = DAY_MS,
+): Promise<number> {
+  const guards = await uploadReferences(sequelize);
+  const notReferenced = guards
+    .map((g) => `AND id NOT IN (SELECT "${g.column}" FROM "${g.table}" WHERE "${g.column}" IS NOT NULL)`)
+    .join(' ');
+  const cutoff = new Date(Date.now() - olderThanMs);
+  const stale = await sequelize.query<{ id: number; fileKey: string }>(
+    `SELECT id, fileKey FROM uploads WHERE claimedAt IS NULL AND createdAt < :cutoff ${notReferenced}`,
+    { type: QueryTypes.SELECT, replacements: { cutoff } },
+  );
+  let removed = 0;
+  for (const row of stale) {
+    const count = await Upload.destroy({ where: { id: row.id, claimedAt: null } });
+    if (count === 1) {
+      await removeUploadFiles(dataDir, row.fileKey);
+      removed += 1;
+    }
+  }
+  return removed;
+}
+
+async function uploadReferences(sequelize: Sequelize): Promise<{ table: string; column: string }[]> {
+  const tables = await sequelize.query<{ name: string }>(
+    "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%'",
+    { type: QueryTypes.SELECT },
+  );
+  const refs: { table: string; column: string }[] = [];
+  for (const { name } of tables) {
+    if (!/^[A-Za-z0-9_]+$/.test(name)) continue;
+    const keys = await sequelize.query<{ table: string; from: string }>(`PRAGMA foreign_key_list("${name}")`, {
+      type: QueryTypes.SELECT,
+    });
+    for (const k of keys) if (k.table === 'uploads') refs.push({ table: name, column: k.from });
+  }
+  return refs;
+}
+
+let lastSweep = 0;
+/** The sweep runs at most once an hour, started by an upload rather than by a timer, so tests and scripts stay quiet. */
+export function sweepNowAndThen(sequelize: Sequelize, dataDir: string, onError: (err: unknown) => void) {
+  if (Date.now() - lastSweep < 60 * 60 * 1000) return;
+  lastSweep = Date.now();
+  sweepAbandonedUploads(sequelize, dataDir).catch(onError);
+}

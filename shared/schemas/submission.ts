@@ -1,0 +1,149 @@
+import { z } from 'zod';
+import { ProjectCriterion } from './content';
+import { UploadDTO } from './upload';
+
+export const SUBMISSION_STATUSES = ['draft', 'waiting', 'passed', 'rework'] as const;
+export const SubmissionStatus = z.enum(SUBMISSION_STATUSES);
+export type SubmissionStatus = z.infer<typeof SubmissionStatus>;
+
+export const MAX_PHOTOS = 12;
+const Id = z.number().int().positive();
+const IdList = (what: string) =>
+  z
+    .array(Id)
+    .max(30, `Link at most 30 ${what}.`)
+    .refine((ids) => new Set(ids).size === ids.length, `Each of the ${what} may be linked once.`);
+
+export const PhotoInput = z.object({
+  uploadId: Id,
+  caption: z.string().trim().max(300, 'Keep a caption under 300 characters.').default(''),
+});
+export type PhotoInput = z.infer<typeof PhotoInput>;
+
+/**
+ * What the apprentice edits in a draft version; photos are in the order they will be shown. Fields left out keep their
+ * value (a new version after rework starts from the version before it).
+ */
+export const SubmissionDraftPatch = z.object({
+  notes: z.string().max(20_000, 'Keep the notes under 20 000 characters.').optional(),
+  photos: z
+    .array(PhotoInput)
+    .max(MAX_PHOTOS, `Send at most ${MAX_PHOTOS} photos.`)
+    .refine((p) => new Set(p.map((x) => x.uploadId)).size === p.length, 'Each photo may appear once.')
+    .optional(),
+  logEntryIds: IdList('log entries').optional(),
+  calculationIds: IdList('calculations').optional(),
+});
+export type SubmissionDraftPatch = z.infer<typeof SubmissionDraftPatch>;
+
+export const SubmissionCreateInput = SubmissionDraftPatch.extend({ projectId: Id });
+export type SubmissionCreateInput = z.infer<typeof SubmissionCreateInput>;
+
+export const SubmissionListQuery = z.object({
+  projectId: z.coerce.number().int().positive().optional(),
+  /** Mentors and the admin name the apprentice whose pieces they want. */
+  apprentice: z.coerce.number().int().positive().optional(),
+});
+export type SubmissionListQuery = z.infer<typeof SubmissionListQuery>;
+
+export const Person = z.object({ id: z.number().int(), name: z.string() });
+export type Person = z.infer<typeof Person>;
+
+export const ProjectSummary = z.object({
+  id: z.number().int(),
+  title: z.string(),
+  brief: z.string(),
+  passMark: z.number(),
+  criteria: z.array(ProjectCriterion),
+  lesson: z.object({ id: z.number().int(), slug: z.string(), title: z.string() }),
+  course: z.object({ id: z.number().int(), slug: z.string(), title: z.string() }),
+});
+export type ProjectSummary = z.infer<typeof ProjectSummary>;
+
+export const SubmissionPhotoDTO = UploadDTO.omit({ id: true }).extend({
+  uploadId: z.number().int(),
+  position: z.number().int(),
+  caption: z.string(),
+});
+export type SubmissionPhotoDTO = z.infer<typeof SubmissionPhotoDTO>;
+
+export const PinDTO = z.object({
+  id: z.number().int(),
+  number: z.number().int(),
+  uploadId: z.number().int(),
+  x: z.number(),
+  y: z.number(),
+  note: z.string(),
+});
+export type PinDTO = z.infer<typeof PinDTO>;
+
+export const Outcome = z.enum(['passed', 'rework']);
+export type Outcome = z.infer<typeof Outcome>;
+
+export const ReviewDTO = z.object({
+  id: z.number().int(),
+  versionId: z.number().int(),
+  mentor: Person,
+  scores: z.record(z.string(), z.number().int()),
+  comment: z.string(),
+  weightedScore: z.number(),
+  outcome: Outcome,
+  createdAt: z.string(),
+  pins: z.array(PinDTO),
+});
+export type ReviewDTO = z.infer<typeof ReviewDTO>;
+
+/** A linked bench-log entry or saved calculation; `label` is null when the record is gone or unreadable. */
+export const LinkedRecord = z.object({ id: z.number().int(), label: z.string().nullable() });
+export type LinkedRecord = z.infer<typeof LinkedRecord>;
+
+export const VersionDTO = z.object({
+  id: z.number().int(),
+  number: z.number().int(),
+  notes: z.string(),
+  sentAt: z.string().nullable(),
+  photos: z.array(SubmissionPhotoDTO),
+  logEntries: z.array(LinkedRecord),
+  calculations: z.array(LinkedRecord),
+  review: ReviewDTO.nullable(),
+});
+export type VersionDTO = z.infer<typeof VersionDTO>;
+
+export const SubmissionDTO = z.object({
+  id: z.number().int(),
+  status: SubmissionStatus,
+  apprentice: Person,
+  project: ProjectSummary,
+  currentVersion: z.number().int(),
+  sentAt: z.string().nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  /** Oldest first. */
+  versions: z.array(VersionDTO),
+});
+export type SubmissionDTO = z.infer<typeof SubmissionDTO>;
+
+export const SubmissionListItem = z.object({
+  id: z.number().int(),
+  status: SubmissionStatus,
+  project: z.object({ id: z.number().int(), title: z.string() }),
+  lesson: z.object({ slug: z.string(), title: z.string() }),
+  course: z.object({ slug: z.string(), title: z.string() }),
+  currentVersion: z.number().int(),
+  sentAt: z.string().nullable(),
+  updatedAt: z.string(),
+  thumbUrl: z.string().nullable(),
+  lastReview: z.object({ outcome: Outcome, weightedScore: z.number(), createdAt: z.string() }).nullable(),
+});
+export type SubmissionListItem = z.infer<typeof SubmissionListItem>;
+
+export const SubmissionList = z.object({ items: z.array(SubmissionListItem) });
+export type SubmissionList = z.infer<typeof SubmissionList>;
+
+/** Bench-log entries and saved calculations the apprentice may link to a piece. */
+export const LinkOptions = z.object({ logEntries: z.array(LinkedRecord), calculations: z.array(LinkedRecord) });
+export type LinkOptions = z.infer<typeof LinkOptions>;
+
+/** A project as the apprentice starts a piece from it, with the piece already begun for it, if any. */
+export const ProjectForPiece = z.object({ project: ProjectSummary, submissionId: z.number().int().nullable() });
+export type ProjectForPiece = z.infer<typeof ProjectForPiece>;

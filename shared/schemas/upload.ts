@@ -1,0 +1,21 @@
+import { z } from 'zod';
+
+export const UPLOAD_MAX_BYTES = 20 * 1024 * 1024;
+export const UPLOAD_SIZES = ['full', 'view', 'thumb'] as const;
+export const UploadSize = z.enum(UPLOAD_SIZES);
+export type UploadSize = z.infer<typeof UploadSize>;
+/** Longest side in pixels of each stored copy. */
+export const UPLOAD_EDGE: Record<UploadSize, number> = { full: 3200, view: 1600, thumb: 400 };
+
+/** A stored photo; width and height are those of the full copy (orientation applied). */
+export const UploadDTO = z.object({
+  id: z.number().int(),
+  width: z.number().int(),
+  height: z.number().int(),
+  url: z.string(),
+  viewUrl: z.string(),
+  thumbUrl: z.string(),
+});
+export type UploadDTO = z.infer<typeof UploadDTO>;
+
+export const UploadSizeQuery = z.object({ size: UploadSize.default('full') });
