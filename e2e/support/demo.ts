@@ -27,6 +27,6 @@ export async function signOut(page: Page) {
 
 /** Messages caught by the local fake mail service (maildev's REST API). */
 export async function caughtMail(): Promise<{ subject: string; text: string; to: { address: string }[] }[]> {
-  const res = await fetch(`http://localhost:${E2E.mailWebPort}/email`);
+  const res = await fetch(`http://localhost:${E2E.mailWebPort}/api/email`);
   return res.json();
 }

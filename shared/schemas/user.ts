@@ -66,6 +66,9 @@ export type UserListReply = z.infer<typeof UserListReply>;
 export const DevMailReply = z.object({ inboxUrl: z.string().nullable() });
 export type DevMailReply = z.infer<typeof DevMailReply>;
 
+export const PasswordResetRequested = z.object({ message: z.string() });
+export type PasswordResetRequested = z.infer<typeof PasswordResetRequested>;
+
 /** The guild office's changes to an account: its role, and whether it may sign in at all. */
 export const UserUpdateInput = z
   .object({ role: Role.optional(), active: z.boolean().optional() })

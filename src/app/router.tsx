@@ -5,12 +5,15 @@ import { RouteError } from './route-error';
 /** Created once, outside React; every page module is loaded on demand. */
 export const router = createBrowserRouter([
   { path: '/sign-in', lazy: () => import('./routes/sign-in'), errorElement: <RouteError /> },
+  { path: '/forgot-password', lazy: () => import('./routes/forgot-password'), errorElement: <RouteError /> },
+  { path: '/reset-password/:token', lazy: () => import('./routes/reset-password'), errorElement: <RouteError /> },
   {
     element: <AppShell />,
     errorElement: <RouteError />,
     children: [
       { index: true, lazy: () => import('./routes/today') },
       // Feature pages are listed here, one line each.
+      { path: 'account', lazy: () => import('./routes/account') },
       { path: '*', lazy: () => import('./routes/not-found') },
     ],
   },

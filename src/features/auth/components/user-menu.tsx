@@ -3,8 +3,7 @@ import type { UserDTO } from '@shared/schemas/user';
 import { Button } from '@/components/ui/button';
 import { paths } from '@/config/paths';
 import { useSignOut } from '../api/sign-in';
-
-const ROLE_LABEL = { apprentice: 'Apprentice', mentor: 'Mentor', admin: 'Guild office' } as const;
+import { ROLE_LABEL } from '../role-labels';
 
 export function UserMenu({ user }: { user: UserDTO }) {
   const signOut = useSignOut();

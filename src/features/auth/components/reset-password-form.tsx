@@ -1,0 +1,78 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { Link } from 'react-router-dom';
+import { z } from 'zod';
+import { NewPassword, PASSWORD_MIN } from '@shared/schemas/user';
+import { Button, ButtonLink } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { ErrorNotice } from '@/components/ui/states';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { useResetPassword } from '../api/password-reset';
+import { showFieldErrors } from './field-errors';
+
+const ResetForm = z
+  .object({ password: NewPassword, repeat: z.string() })
+  .refine((v) => v.repeat === v.password, { path: ['repeat'], message: 'The two passwords are not the same.' });
+type ResetForm = z.infer<typeof ResetForm>;
+
+export function ResetPasswordForm({ token }: { token: string }) {
+  const resetPassword = useResetPassword(token);
+  const { register, handleSubmit, setError, formState } = useForm<ResetForm>({ resolver: zodResolver(ResetForm) });
+  const { errors } = formState;
+  const error = resetPassword.error;
+
+  if (resetPassword.isSuccess) {
+    return (
+      <div role="status" className="space-y-4">
+        <p className="font-semibold text-ink">Your new password is set.</p>
+        <p className="text-muted">
+          For safety, every place you were signed in has been signed out. Sign in again with the new password.
+        </p>
+        <ButtonLink to={paths.signIn()}>Sign in</ButtonLink>
+      </div>
+    );
+  }
+  if (error instanceof ApiError && error.status === 410) {
+    return (
+      <div className="space-y-4">
+        <ErrorNotice error={error} title="This link no longer works" />
+        <ButtonLink to={paths.forgotPassword}>Ask for a new link</ButtonLink>
+      </div>
+    );
+  }
+  return (
+    <form
+      noValidate
+      onSubmit={handleSubmit(({ password }) =>
+        resetPassword.mutate({ password }, { onError: (err) => showFieldErrors(err, ['password'], setError) }),
+      )}
+      className="space-y-4"
+    >
+      <TextField
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint={`At least ${PASSWORD_MIN} characters.`}
+        error={errors.password?.message}
+        {...register('password')}
+      />
+      <TextField
+        label="New password again"
+        type="password"
+        autoComplete="new-password"
+        error={errors.repeat?.message}
+        {...register('repeat')}
+      />
+      {error && !errors.password && <ErrorNotice error={error} title="Password not set" />}
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <Button type="submit" busy={resetPassword.isPending}>
+          Set new password
+        </Button>
+        <Link to={paths.signIn()} className="text-sm">
+          Back to sign-in
+        </Link>
+      </div>
+    </form>
+  );
+}
