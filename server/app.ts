@@ -5,6 +5,7 @@ import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config/env';
 import { auditRouter } from './features/audit/audit.router';
+import { logEntriesRouter } from './features/bench-log/log-entries.router';
 import { accountRouter } from './features/auth/account.router';
 import { authRouter } from './features/auth/auth.router';
 import { devMailRouter } from './features/auth/dev-mail.router';
@@ -78,6 +79,7 @@ export function createApp(deps: AppDeps) {
   api.use('/classes', classesRouter(deps));
   api.use('/invitations', invitationsRouter(deps));
   api.use('/audit', auditRouter());
+  api.use('/log-entries', logEntriesRouter(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

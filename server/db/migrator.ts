@@ -4,6 +4,7 @@ import * as m0001 from './migrations/0001-core';
 import * as m0003 from './migrations/0003-lesson-progress';
 import * as m0002 from './migrations/0002-password-resets';
 import * as m0004 from './migrations/0004-calculations';
+import * as m0006 from './migrations/0006-bench-log';
 import * as m0007 from './migrations/0007-invitations-audit';
 
 export type Migration = {
@@ -17,6 +18,7 @@ const migrations: Record<string, Migration> = {
   '0003-lesson-progress': m0003,
   '0002-password-resets': m0002,
   '0004-calculations': m0004,
+  '0006-bench-log': m0006,
   '0007-invitations-audit': m0007,
 };
 

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { initAuditModel } from '../features/audit/audit-event.model';
+import { initBenchLogModels } from '../features/bench-log/log-entry.model';
 import { PasswordReset } from '../features/auth/password-reset.model';
 import { Session } from '../features/auth/session.model';
 import { User } from '../features/auth/user.model';
@@ -19,5 +20,6 @@ export function initModels(sequelize: Sequelize) {
   initClassModels(sequelize);
   initInvitationModel(sequelize);
   initAuditModel(sequelize);
+  initBenchLogModels(sequelize);
   Calculation.initModel(sequelize);
 }

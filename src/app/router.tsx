@@ -13,6 +13,9 @@ export const router = createBrowserRouter([
     children: [
       { index: true, lazy: () => import('./routes/today') },
       // Feature pages are listed here, one line each.
+      { path: 'calculators', lazy: () => import('./routes/calculators/calculators-index') },
+      { path: 'calculators/saved', lazy: () => import('./routes/calculators/saved-calculations') },
+      { path: 'calculators/:name', lazy: () => import('./routes/calculators/calculator-page') },
       { path: 'account', lazy: () => import('./routes/account') },
       { path: '*', lazy: () => import('./routes/not-found') },
     ],
