@@ -5,6 +5,7 @@ import { RouteError } from './route-error';
 /** Created once, outside React; every page module is loaded on demand. */
 export const router = createBrowserRouter([
   { path: '/sign-in', lazy: () => import('./routes/sign-in'), errorElement: <RouteError /> },
+  { path: '/invitation/:token', lazy: () => import('./routes/accept-invitation'), errorElement: <RouteError /> },
   { path: '/forgot-password', lazy: () => import('./routes/forgot-password'), errorElement: <RouteError /> },
   { path: '/reset-password/:token', lazy: () => import('./routes/reset-password'), errorElement: <RouteError /> },
   {
@@ -17,6 +18,12 @@ export const router = createBrowserRouter([
       { path: 'calculators/saved', lazy: () => import('./routes/calculators/saved-calculations') },
       { path: 'calculators/:name', lazy: () => import('./routes/calculators/calculator-page') },
       { path: 'account', lazy: () => import('./routes/account') },
+      { path: 'guild-office', lazy: () => import('./routes/guild-office/guild-office') },
+      { path: 'guild-office/people', lazy: () => import('./routes/guild-office/people') },
+      { path: 'guild-office/invitations', lazy: () => import('./routes/guild-office/invitations') },
+      { path: 'guild-office/activity', lazy: () => import('./routes/guild-office/activity') },
+      { path: 'classes', lazy: () => import('./routes/classes/classes') },
+      { path: 'classes/:id', lazy: () => import('./routes/classes/class') },
       { path: '*', lazy: () => import('./routes/not-found') },
     ],
   },
