@@ -11,8 +11,8 @@ const Coord = z.number().min(-10000).max(10000);
 const Distance = z.number().positive().max(10000);
 const pitch = { pitchRadiusMm: z.number().positive().max(1000).optional() };
 
-const FixedArbor = z.object({ name: Name, x: Coord, y: Coord, ...pitch });
-const TwoCircleArbor = z.object({
+export const FixedArbor = z.object({ name: Name, x: Coord, y: Coord, ...pitch });
+export const TwoCircleArbor = z.object({
   name: Name,
   from: z.tuple([Name, Name]),
   distances: z.tuple([Distance, Distance]),
@@ -20,7 +20,7 @@ const TwoCircleArbor = z.object({
   side: z.enum(['left', 'right']),
   ...pitch,
 });
-const PolarArbor = z.object({
+export const PolarArbor = z.object({
   name: Name,
   from: Name,
   distance: Distance,
