@@ -49,11 +49,11 @@ export function ModeChoice({ name, legend, choices }: { name: string; legend: st
         {choices.map((c) => (
           <label
             key={c.value}
-            className="flex min-h-11 cursor-pointer items-center gap-2 rounded-md border border-rule bg-white px-3 text-sm has-[:checked]:border-steel has-[:checked]:bg-steel/10 has-[:checked]:font-semibold has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-steel"
+            className="relative flex min-h-11 cursor-pointer items-center gap-2 rounded-md border border-rule bg-white px-3 text-sm has-[:checked]:border-steel has-[:checked]:bg-steel/10 has-[:checked]:font-semibold has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-steel"
           >
             <input
               type="radio"
-              className="sr-only"
+              className="absolute inset-0 cursor-pointer appearance-none opacity-0"
               name={`${group}-${name}`}
               value={c.value}
               checked={(draft[name] ?? '') === c.value}

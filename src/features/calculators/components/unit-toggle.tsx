@@ -13,12 +13,12 @@ export function UnitToggle({ value, onChange }: { value: UnitSystem; onChange: (
       {OPTIONS.map((o) => (
         <label
           key={o.value}
-          className="flex min-h-11 cursor-pointer items-center gap-2 rounded-md border border-rule bg-card px-3 text-sm has-[:checked]:border-steel has-[:checked]:bg-steel/10 has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-steel"
+          className="relative flex min-h-11 cursor-pointer items-center gap-2 rounded-md border border-rule bg-card px-3 text-sm has-[:checked]:border-steel has-[:checked]:bg-steel/10 has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-steel"
         >
           <input
             type="radio"
             name="unit-system"
-            className="sr-only"
+            className="absolute inset-0 cursor-pointer appearance-none opacity-0"
             value={o.value}
             checked={value === o.value}
             onChange={() => onChange(o.value)}
