@@ -1,0 +1,52 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render, screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { MemoryRouter, useLocation } from 'react-router-dom';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { authKeys } from '@/features/auth/api/auth-keys';
+import { CalculatorWidget } from '@/features/calculators/components/calculator-widget';
+import { fakeServer, ned, resultOf } from './calculator-support';
+
+vi.setConfig({ testTimeout: 30_000 });
+afterEach(() => vi.unstubAllGlobals());
+
+function Address() {
+  return <output data-testid="address">{useLocation().search}</output>;
+}
+
+function renderInLesson(name: string) {
+  const client = new QueryClient();
+  client.setQueryData(authKeys.me, ned);
+  render(
+    <QueryClientProvider client={client}>
+      <MemoryRouter initialEntries={['/courses/going-train-wall-regulator/broaching?step=2']}>
+        <CalculatorWidget name={name} />
+        <Address />
+      </MemoryRouter>
+    </QueryClientProvider>,
+  );
+}
+
+describe('calculator widget', () => {
+  it('when a lesson embeds a calculator by name, then it computes as you type and leaves the page address alone', async () => {
+    fakeServer();
+    renderInLesson('broach-taper');
+    expect(screen.getByText('Broach taper calculator')).toBeInTheDocument();
+    expect(resultOf('Insertion depth')).toBe('27.5 mm'); // TRADE.md §1 (computed)
+    const target = screen.getByRole('textbox', { name: /Target hole diameter/ });
+    await userEvent.clear(target);
+    await userEvent.type(target, '1.1');
+    expect(resultOf('Insertion depth')).toBe('30 mm'); // (1.1 − 0.5) / 0.02 (computed)
+    expect(screen.getByTestId('address').textContent).toBe('?step=2');
+    expect(screen.getByRole('link', { name: /Open on its own page/ })).toHaveAttribute(
+      'href',
+      '/calculators/broach-taper',
+    );
+  });
+
+  it('when the name is not a calculator, then the widget says so instead of failing the lesson', () => {
+    fakeServer();
+    renderInLesson('escapement');
+    expect(screen.getByText('There is no calculator called “escapement”.')).toBeInTheDocument();
+  });
+});
