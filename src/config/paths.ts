@@ -13,6 +13,7 @@ export const paths = {
   savedCalculations: '/calculators/saved',
   benchLog: '/bench-log',
   logEntry: (id: number) => `/bench-log/${id}`,
+  apprenticeLog: (apprenticeId: number) => `/bench-log?apprentice=${apprenticeId}`,
   myPieces: '/pieces',
   submission: (id: number) => `/pieces/${id}`,
   newSubmission: (projectId: number) => `/pieces/new?project=${projectId}`,

@@ -2,6 +2,8 @@ import { Navigate } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/card';
 import { paths } from '@/config/paths';
 import { useUser } from '@/features/auth/api/get-me';
+import { EntriesToReadPanel } from '@/features/bench-log/components/entries-to-read-panel';
+import { WeekHoursPanel } from '@/features/bench-log/components/week-hours-panel';
 
 /** "Today": what to do next. Each feature contributes its own panel for the roles it serves. */
 export function Component() {
@@ -18,7 +20,10 @@ export function Component() {
             : 'Pieces waiting for you, log entries to read, and your classes at a glance.'
         }
       />
-      <div className="grid gap-6 md:grid-cols-2" />
+      <div className="grid gap-6 md:grid-cols-2">
+        {user.role === 'apprentice' && <WeekHoursPanel />}
+        {user.role === 'mentor' && <EntriesToReadPanel />}
+      </div>
     </>
   );
 }

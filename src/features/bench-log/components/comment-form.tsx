@@ -1,0 +1,26 @@
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { TextArea } from '@/components/ui/field';
+import { ErrorNotice } from '@/components/ui/states';
+import { useAddFeedback } from '../api/add-feedback';
+
+export function CommentForm({ entryId }: { entryId: number }) {
+  const { comment } = useAddFeedback(entryId);
+  const [body, setBody] = useState('');
+  return (
+    <form
+      className="space-y-2"
+      aria-label="Comment on this entry"
+      onSubmit={(e) => {
+        e.preventDefault();
+        if (body.trim()) comment.mutate({ body }, { onSuccess: () => setBody('') });
+      }}
+    >
+      <TextArea label="Your comment" rows={3} value={body} onChange={(e) => setBody(e.target.value)} />
+      {comment.error && <ErrorNotice error={comment.error} title="The comment was not saved" />}
+      <Button type="submit" variant="secondary" busy={comment.isPending} disabled={!body.trim()}>
+        Add comment
+      </Button>
+    </form>
+  );
+}
