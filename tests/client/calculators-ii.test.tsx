@@ -145,6 +145,22 @@ describe('fusee form', () => {
   });
 });
 
+describe('unit toggle on the row editors', () => {
+  it('when inches and ounces are chosen, then the readings and radii are shown in them and typed inches are kept as mm', async () => {
+    // 1 in = 25.4 mm and 1 oz = 28.349523125 g (definitions, from memory)
+    renderForm('fusee');
+    fireEvent.click(screen.getByLabelText(/Imperial/));
+    const weight = screen.getByLabelText('Turn 1 weight (oz)');
+    expect(weight).toHaveValue('7.0547924');
+    expect(screen.getByRole('columnheader', { name: 'Fusee radius (in)' })).toBeInTheDocument();
+    // The first radius is the barrel's 15 mm chain radius: 0.5906 in (computed)
+    expect(screen.getAllByTestId('radius-row')[0].querySelectorAll('td')[3]).toHaveTextContent('0.5906');
+    fireEvent.change(screen.getByLabelText('Turn 1 balance distance (in)'), { target: { value: '2' } });
+    fireEvent.click(screen.getByLabelText(/Metric/));
+    expect(screen.getByLabelText('Turn 1 balance distance (mm)')).toHaveValue('50.8');
+  });
+});
+
 describe('wheel and pinion form', () => {
   it('when module 0.5 with 64 teeth and 8 leaves is shown, then the centre distance is 18 mm and the mesh is drawn', async () => {
     // TRADE.md §4: m = 0.5, 64 : 8 → a = 18.00 mm; wheel blank 33.38 mm (forum rule) (computed)
@@ -176,6 +192,14 @@ describe('train and pendulum form', () => {
     const use = await screen.findAllByRole('button', { name: /^Use the train/ });
     fireEvent.click(use[0]);
     expect(figure('Beats per hour')).toBe('5400\u00a0beats/h');
+  });
+
+  it('when a uniform rod of 1.5 m is checked, then its equivalent simple length is 1000 mm', async () => {
+    // HyperPhysics "Rod pendulum": uniform rod 1.5 m → L_eq = 1.000 m, T = 2.00641 s
+    renderForm('train-pendulum');
+    fireEvent.click(screen.getByLabelText('Uniform rod'));
+    expect(figure("Your pendulum's equivalent simple length")).toBe('1000\u00a0mm');
+    expect(figure("Your pendulum's full period")).toBe('2.00641\u00a0s');
   });
 
   it('when a row is added and left blank, then its cells ask for numbers and no figure reads NaN', async () => {

@@ -78,13 +78,15 @@ export function MeshDrawing({ sizes, unitSystem }: { sizes: MeshSizes; unitSyste
           </g>
         ))}
         <circle cx={pitchPoint.x} cy={pitchPoint.y} r={span * 0.008} fill={BRASS} />
-        <g stroke={INK} strokeWidth={1} {...line}>
-          <line x1={0} y1={0} x2={0} y2={dimY + font * 0.4} />
-          <line x1={pinion.cx} y1={0} x2={pinion.cx} y2={dimY + font * 0.4} />
-          <line x1={0} y1={dimY} x2={pinion.cx} y2={dimY} />
-          <path d={`M ${arrow} ${dimY - arrow / 2} L 0 ${dimY} L ${arrow} ${dimY + arrow / 2}`} />
+        {/* vector-effect is not inherited, so each stroke of the dimension carries it. */}
+        <g stroke={INK} strokeWidth={1} fill="none">
+          <line x1={0} y1={0} x2={0} y2={dimY + font * 0.4} {...line} />
+          <line x1={pinion.cx} y1={0} x2={pinion.cx} y2={dimY + font * 0.4} {...line} />
+          <line x1={0} y1={dimY} x2={pinion.cx} y2={dimY} {...line} />
+          <path d={`M ${arrow} ${dimY - arrow / 2} L 0 ${dimY} L ${arrow} ${dimY + arrow / 2}`} {...line} />
           <path
             d={`M ${pinion.cx - arrow} ${dimY - arrow / 2} L ${pinion.cx} ${dimY} L ${pinion.cx - arrow} ${dimY + arrow / 2}`}
+            {...line}
           />
         </g>
         <text

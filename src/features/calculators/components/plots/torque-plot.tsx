@@ -19,7 +19,7 @@ export function TorquePlot({ springTorqueNmm, fuseeTorqueNmm }: Props) {
     <figure className="space-y-2" data-testid="torque-plot">
       <div className="h-72 w-full print:h-64">
         <ResponsiveContainer width="100%" height="100%" initialDimension={{ width: 600, height: 288 }}>
-          <LineChart data={data} margin={{ top: 8, right: 16, bottom: 20, left: 16 }}>
+          <LineChart data={data} margin={{ top: 12, right: 16, bottom: 20, left: 16 }}>
             <CartesianGrid stroke="#e3dccb" />
             <XAxis
               dataKey="turn"
@@ -34,7 +34,7 @@ export function TorquePlot({ springTorqueNmm, fuseeTorqueNmm }: Props) {
               label={{ value: 'Torque (N·mm)', angle: -90, position: 'insideLeft', offset: -4 }}
             />
             <Tooltip formatter={label} labelFormatter={(t) => `Turn ${t}`} />
-            <Legend verticalAlign="top" />
+            <Legend verticalAlign="top" wrapperStyle={{ paddingBottom: 12 }} />
             <Line
               name="Spring torque (at the barrel)"
               dataKey="spring"

@@ -26,18 +26,13 @@ export function TrainRows() {
   return (
     <fieldset className="space-y-2">
       <legend className="text-sm font-semibold text-ink">Train, from the centre wheel to the escape pinion</legend>
-      <div className="grid grid-cols-[1fr_1fr_auto] gap-x-2 gap-y-1 text-sm text-muted" aria-hidden>
-        <span>Wheel (teeth)</span>
-        <span>Pinion it drives (leaves)</span>
-        <span className="w-11" />
-      </div>
       {indexes.map((i) => {
         const names = rowNames(i, rows);
         return (
           <div key={i} className="grid grid-cols-[1fr_1fr_auto] items-start gap-2" data-testid="train-row">
             <div>
-              <span className="text-xs text-muted">{names.wheel}</span>
               <CellInput
+                showLabel
                 label={`${names.wheel} teeth`}
                 quantity="count"
                 value={cell(wheels, i)}
@@ -51,8 +46,8 @@ export function TrainRows() {
               />
             </div>
             <div>
-              <span className="text-xs text-muted">{names.pinion}</span>
               <CellInput
+                showLabel
                 label={`${names.pinion} leaves`}
                 quantity="count"
                 value={cell(pinions, i)}
@@ -67,7 +62,7 @@ export function TrainRows() {
             </div>
             <Button
               variant="quiet"
-              className="no-print mt-4 w-11 px-0"
+              className="no-print mt-6 w-11 px-0"
               aria-label={`Remove the ${names.wheel.toLowerCase()} row`}
               disabled={rows <= 1}
               onClick={() => {
