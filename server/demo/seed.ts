@@ -3,6 +3,7 @@ import { hashPassword } from '../features/auth/passwords';
 import { User } from '../features/auth/user.model';
 import { ClassMentor, Enrolment, GuildClass } from '../features/classes/class.model';
 import { Course } from '../features/courses/course.model';
+import { seedSubmissions } from './seed-submissions';
 import { DEMO_CLASSES, DEMO_PASSWORD, DEMO_PEOPLE, demoEmail } from './people';
 import { seedBenchLog } from './seed-bench-log';
 import { seedClasses } from './seed-classes';
@@ -46,4 +47,4 @@ export async function seedDemo(sequelize: Sequelize): Promise<void> {
 }
 
 /** Feature demo data (bench log, submissions, …), each idempotent; one line per feature. */
-const FEATURE_SEEDS: ((sequelize: Sequelize) => Promise<void>)[] = [seedClasses, seedBenchLog];
+const FEATURE_SEEDS: ((sequelize: Sequelize) => Promise<void>)[] = [seedClasses, seedBenchLog, seedSubmissions];

@@ -4,6 +4,7 @@ import { paths } from '@/config/paths';
 import { Loading } from '@/components/ui/states';
 import { useMe } from '@/features/auth/api/get-me';
 import { UserMenu } from '@/features/auth/components/user-menu';
+import { BellLink } from '@/features/notifications/components/bell-link';
 import { NAV } from './nav';
 import { NavBadge } from './nav-badge';
 
@@ -49,6 +50,7 @@ export function AppShell() {
               </NavLink>
             ))}
           </nav>
+          <BellLink />
           <UserMenu user={user} />
         </div>
       </header>

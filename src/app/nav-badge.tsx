@@ -1,3 +1,5 @@
+import { useMe } from '@/features/auth/api/get-me';
+import { useQueueCount } from '@/features/reviews/api/get-review-queue';
 import type { NavItem } from './nav';
 
 /** Counts beside navigation items; each badge name is filled in by the feature that owns the count. */
@@ -11,6 +13,9 @@ export function NavBadge({ name }: { name: NonNullable<NavItem['badge']> }) {
   );
 }
 
-function useBadgeCount(_name: NonNullable<NavItem['badge']>): number {
-  return 0;
+function useBadgeCount(name: NonNullable<NavItem['badge']>): number {
+  const { data: user } = useMe();
+  const reviewer = user?.role === 'mentor' || user?.role === 'admin';
+  const { data: waiting = 0 } = useQueueCount(name === 'reviewQueue' && reviewer);
+  return name === 'reviewQueue' ? waiting : 0;
 }

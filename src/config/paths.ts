@@ -17,6 +17,7 @@ export const paths = {
   myPieces: '/pieces',
   submission: (id: number) => `/pieces/${id}`,
   newSubmission: (projectId: number) => `/pieces/new?project=${projectId}`,
+  editSubmission: (id: number) => `/pieces/${id}/edit`,
   reviewQueue: '/review',
   review: (submissionId: number) => `/review/${submissionId}`,
   notifications: '/notifications',

@@ -1,6 +1,6 @@
 import { fileTypeFromBuffer } from 'file-type';
-import sharp, { type Sharp } from 'sharp';
-import { UPLOAD_EDGE, UPLOAD_SIZES, type UploadSize } from '@shared/schemas/upload';
+import sharp from 'sharp';
+import { UPLOAD_EDGE, type UploadSize } from '@shared/schemas/upload';
 import { AppError } from '../../lib/app-error';
 
 const ACCEPTED = new Set(['image/jpeg', 'image/png', 'image/webp']);
@@ -28,16 +28,9 @@ export async function processImage(bytes: Buffer): Promise<ProcessedImage> {
   if (!ACCEPTED.has(mime) && !heic) {
     throw refuse('Only photographs in JPEG, PNG or WebP can be uploaded. This file is not one of them.');
   }
-  const source = sharp(bytes, { failOn: 'error', limitInputPixels: MAX_INPUT_PIXELS }).rotate();
   try {
-    const outputs = await Promise.all(UPLOAD_SIZES.map((size) => encode(source.clone(), UPLOAD_EDGE[size])));
-    const [full] = outputs;
-    return {
-      sourceType: mime,
-      width: full.info.width,
-      height: full.info.height,
-      files: Object.fromEntries(UPLOAD_SIZES.map((size, i) => [size, outputs[i].data])) as Record<UploadSize, Buffer>,
-    };
+    const files = await encodeSizes(bytes);
+    return { sourceType: mime, width: files.width, height: files.height, files: files.files };
   } catch (err) {
     if (heic)
       throw refuse(
@@ -50,10 +43,34 @@ export async function processImage(bytes: Buffer): Promise<ProcessedImage> {
   }
 }
 
-function encode(pipeline: Sharp, edge: number) {
-  return pipeline
-    .resize({ width: edge, height: edge, fit: 'inside', withoutEnlargement: true })
+type Raw = { data: Buffer; info: { width: number; height: number; channels: number } };
+const rawInput = (r: Raw) => ({
+  raw: { width: r.info.width, height: r.info.height, channels: r.info.channels as 1 | 2 | 3 | 4 },
+});
+const fit = (edge: number) => ({ width: edge, height: edge, fit: 'inside' as const, withoutEnlargement: true });
+const JPEG = { quality: 84, mozjpeg: false, optimiseCoding: false } as const;
+
+/**
+ * The photo is decoded once, turned upright and reduced to the full size as raw pixels; the smaller sizes are made from
+ * those pixels rather than by decoding the file again. That keeps a 12-megapixel photo well under a second.
+ */
+async function encodeSizes(bytes: Buffer) {
+  const full: Raw = await sharp(bytes, { failOn: 'error', limitInputPixels: MAX_INPUT_PIXELS })
+    .rotate()
     .flatten({ background: '#ffffff' })
-    .jpeg({ quality: 84, mozjpeg: false, chromaSubsampling: '4:2:0' })
+    .toColourspace('srgb')
+    .resize(fit(UPLOAD_EDGE.full))
+    .raw({ depth: 'uchar' })
     .toBuffer({ resolveWithObject: true });
+  const view: Raw = await sharp(full.data, rawInput(full))
+    .resize(fit(UPLOAD_EDGE.view))
+    .raw()
+    .toBuffer({ resolveWithObject: true });
+  const [fullJpeg, viewJpeg, thumbJpeg] = await Promise.all([
+    sharp(full.data, rawInput(full)).jpeg(JPEG).toBuffer(),
+    sharp(view.data, rawInput(view)).jpeg(JPEG).toBuffer(),
+    sharp(view.data, rawInput(view)).resize(fit(UPLOAD_EDGE.thumb)).jpeg(JPEG).toBuffer(),
+  ]);
+  const files: Record<UploadSize, Buffer> = { full: fullJpeg, view: viewJpeg, thumb: thumbJpeg };
+  return { width: full.info.width, height: full.info.height, files };
 }

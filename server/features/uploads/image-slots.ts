@@ -1,8 +1,10 @@
+import { availableParallelism } from 'node:os';
+
 /**
- * Decoding a 12-megapixel photo takes a few hundred megabytes and both cores; a handful at a time keeps memory bounded
- * while ten people uploading at once simply queue for a moment.
+ * Re-encoding a 12-megapixel photo holds about a hundred megabytes of pixels and keeps a core busy; one job per core
+ * (two to four) keeps memory bounded, and ten people uploading at once simply queue for a moment.
  */
-const MAX_AT_ONCE = 3;
+const MAX_AT_ONCE = Math.max(2, Math.min(4, availableParallelism()));
 let running = 0;
 const waiting: (() => void)[] = [];
 

@@ -2,6 +2,8 @@ import { Navigate } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/card';
 import { paths } from '@/config/paths';
 import { useUser } from '@/features/auth/api/get-me';
+import { BackFromReviewPanel } from '@/features/reviews/components/back-from-review-panel';
+import { WaitingPanel } from '@/features/reviews/components/waiting-panel';
 import { EntriesToReadPanel } from '@/features/bench-log/components/entries-to-read-panel';
 import { WeekHoursPanel } from '@/features/bench-log/components/week-hours-panel';
 
@@ -21,6 +23,8 @@ export function Component() {
         }
       />
       <div className="grid gap-6 md:grid-cols-2">
+        {user.role === 'apprentice' && <BackFromReviewPanel />}
+        {user.role === 'mentor' && <WaitingPanel />}
         {user.role === 'apprentice' && <WeekHoursPanel />}
         {user.role === 'mentor' && <EntriesToReadPanel />}
       </div>
