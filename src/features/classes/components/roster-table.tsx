@@ -1,8 +1,10 @@
 import { useState } from 'react';
+import { Link } from 'react-router-dom';
 import { toast } from 'sonner';
 import type { RosterEntry, RosterReply, RosterStatus } from '@shared/schemas/class';
 import { Button } from '@/components/ui/button';
 import { EmptyState, ErrorNotice } from '@/components/ui/states';
+import { paths } from '@/config/paths';
 import { useSetEnrolment } from '../api/save-class';
 import { formatWhen } from './format';
 
@@ -61,6 +63,7 @@ export function RosterTable({ classId, roster, canEdit }: { classId: number; ros
                     {e.name || <span className="font-normal text-muted">(name not given yet)</span>}
                   </div>
                   <div className="text-muted">{e.email}</div>
+                  {e.userId && <Link to={paths.apprenticeLog(e.userId)}>Bench log</Link>}
                 </td>
                 <td className="p-3">
                   <span className={`rounded border px-2 py-0.5 text-xs font-semibold ${STATUS_STYLE[e.status]}`}>
