@@ -7,6 +7,8 @@ import { Invitation } from '../features/classes/invitation.model';
 import { newInvitationToken } from '../features/classes/invitation-token';
 import { DEMO_CLASSES, DEMO_PEOPLE, demoEmail } from './people';
 
+const DAY_MS = 24 * 3600 * 1000;
+
 /** Invented invitees who have not accepted yet, so the guild office has pending invitations to show. */
 const PENDING = [
   { name: 'Isolde Penwarden', key: 'isolde', cls: 'spring' },
@@ -39,8 +41,9 @@ export async function seedClasses(sequelize: Sequelize): Promise<void> {
     for (const [key, spec] of Object.entries(DEMO_CLASSES)) {
       const cls = await GuildClass.findOne({ where: { name: spec.name }, transaction });
       if (!cls) continue;
-      // Dated a few weeks before each class starts, as an office would set it up.
-      const setUp = new Date(new Date(`${spec.startsOn}T09:00:00Z`).getTime() - 28 * 24 * 3600 * 1000);
+      // Dated as an office would set a class up, a few weeks before it starts, but never in the future.
+      const fourWeeksBefore = new Date(`${spec.startsOn}T09:00:00Z`).getTime() - 28 * DAY_MS;
+      const setUp = new Date(Math.min(fourWeeksBefore, Date.now() - DAY_MS));
       const { name, startsOn, endsOn, capacity } = spec;
       await once(
         'class.created',

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { toast } from 'sonner';
 import { ROLES, type Role, type UserListItem } from '@shared/schemas/user';
 import { Button } from '@/components/ui/button';
@@ -72,11 +73,10 @@ export function PeopleTable({ users, selfId }: { users: UserListItem[]; selfId: 
                   <td className="p-3">{u.active ? 'Active' : <strong className="text-error">Deactivated</strong>}</td>
                   <td className="p-3 text-right">
                     {!self && (
-                      <Button
-                        variant={u.active ? 'quiet' : 'secondary'}
+                      <AccountToggle
+                        user={u}
                         busy={update.isPending && update.variables?.id === u.id}
-                        aria-label={`${u.active ? 'Deactivate' : 'Reactivate'} ${u.name}`}
-                        onClick={() =>
+                        onToggle={() =>
                           change(
                             u,
                             { active: !u.active },
@@ -85,9 +85,7 @@ export function PeopleTable({ users, selfId }: { users: UserListItem[]; selfId: 
                               : `${u.name} can sign in again.`,
                           )
                         }
-                      >
-                        {u.active ? 'Deactivate' : 'Reactivate'}
-                      </Button>
+                      />
                     )}
                   </td>
                 </tr>
@@ -97,5 +95,41 @@ export function PeopleTable({ users, selfId }: { users: UserListItem[]; selfId: 
         </table>
       </div>
     </div>
+  );
+}
+
+/** Deactivating signs the person out at once, so it asks once more in place; reactivating does not need to. */
+function AccountToggle({ user, busy, onToggle }: { user: UserListItem; busy: boolean; onToggle: () => void }) {
+  const [confirming, setConfirming] = useState(false);
+  if (!user.active) {
+    return (
+      <Button variant="secondary" busy={busy} onClick={onToggle} aria-label={`Reactivate ${user.name}`}>
+        Reactivate
+      </Button>
+    );
+  }
+  if (!confirming) {
+    return (
+      <Button variant="quiet" onClick={() => setConfirming(true)} aria-label={`Deactivate ${user.name}`}>
+        Deactivate
+      </Button>
+    );
+  }
+  return (
+    <span className="inline-flex flex-wrap justify-end gap-2">
+      <Button
+        variant="danger"
+        busy={busy}
+        onClick={() => {
+          setConfirming(false);
+          onToggle();
+        }}
+      >
+        Deactivate and sign out
+      </Button>
+      <Button variant="quiet" onClick={() => setConfirming(false)}>
+        Keep
+      </Button>
+    </span>
   );
 }
