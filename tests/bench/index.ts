@@ -1,7 +1,8 @@
 import { execSync } from 'node:child_process';
 import { runBundleBudget } from './bundle-budget';
+import { runTrainSearchBench } from './train-search';
 
 /** `npm run bench`: speed and size targets, measured by scripts rather than timed unit tests. */
 execSync('npx vite build --logLevel warn', { stdio: 'inherit' });
-const results = [runBundleBudget()];
+const results = [runBundleBudget(), runTrainSearchBench()];
 process.exitCode = results.every(Boolean) ? 0 : 1;
