@@ -37,5 +37,11 @@ function toAppError(err: unknown): AppError {
     return AppError.badRequest('The request body is not valid JSON.');
   }
   if (status === 413) return new AppError('TOO_LARGE', 'The request is too large.', 413);
+  if (status === 404) return AppError.notFound('That file');
+  // Other client errors raised by Express itself (http-errors) keep their status; their messages are safe when exposed.
+  if (status && status >= 400 && status < 500) {
+    const exposed = (err as { expose?: boolean }).expose ? (err as Error).message : 'The request could not be handled.';
+    return new AppError('BAD_REQUEST', exposed, status);
+  }
   return new AppError('INTERNAL', 'Something went wrong on our side. Please try again.', 500);
 }
