@@ -7,6 +7,7 @@ import { seedSubmissions } from './seed-submissions';
 import { DEMO_CLASSES, DEMO_PASSWORD, DEMO_PEOPLE, demoEmail } from './people';
 import { seedBenchLog } from './seed-bench-log';
 import { seedClasses } from './seed-classes';
+import { seedLessonProgress } from './seed-lesson-progress';
 
 /**
  * Loads the demo scenario. Idempotent: every row is found by a natural key before it is created, so a second run
@@ -47,4 +48,9 @@ export async function seedDemo(sequelize: Sequelize): Promise<void> {
 }
 
 /** Feature demo data (bench log, submissions, …), each idempotent; one line per feature. */
-const FEATURE_SEEDS: ((sequelize: Sequelize) => Promise<void>)[] = [seedClasses, seedBenchLog, seedSubmissions];
+const FEATURE_SEEDS: ((sequelize: Sequelize) => Promise<void>)[] = [
+  seedClasses,
+  seedBenchLog,
+  seedSubmissions,
+  seedLessonProgress,
+];

@@ -14,6 +14,10 @@ export const router = createBrowserRouter([
     children: [
       { index: true, lazy: () => import('./routes/today') },
       // Feature pages are listed here, one line each.
+      { path: 'courses', lazy: () => import('./routes/courses/course-list') },
+      { path: 'courses/:slug', lazy: () => import('./routes/courses/course-page') },
+      { path: 'courses/:slug/:lessonSlug', lazy: () => import('./routes/courses/lesson-page') },
+      { path: 'search', lazy: () => import('./routes/search') },
       { path: 'calculators', lazy: () => import('./routes/calculators/calculators-index') },
       { path: 'calculators/saved', lazy: () => import('./routes/calculators/saved-calculations') },
       { path: 'calculators/:name', lazy: () => import('./routes/calculators/calculator-page') },

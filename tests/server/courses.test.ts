@@ -3,6 +3,8 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CONTENT_DIR } from '../../server/boot';
+import { seedDemo } from '../../server/demo/seed';
+import { User } from '../../server/features/auth/user.model';
 import { Enrolment, GuildClass } from '../../server/features/classes/class.model';
 import { Lesson } from '../../server/features/courses/course.model';
 import { syncContent } from '../../server/features/courses/content-sync';
@@ -245,5 +247,24 @@ describe('retired lessons', () => {
     const res = await agent.get(`/api/courses/${GOING}/lessons/broaching-pivot-holes`);
     expect(res.body.lesson).toMatchObject({ id: lesson.id, done: true });
     expect((await agent.get(`/api/courses/${GOING}`)).body.course.lessonsDone).toBe(1);
+  });
+});
+
+describe('demo progress', () => {
+  it('when the demo data is loaded twice, then Ned has his first three lessons done, once each', async () => {
+    const d = await createTestApp();
+    try {
+      await seedDemo(d.sequelize);
+      await seedDemo(d.sequelize);
+      const ned = await User.findOne({ where: { email: 'ned@saltmarsh-guild.test' }, rejectOnEmpty: true });
+      const rows = await LessonProgress.findAll({ where: { userId: ned.id } });
+      const lessons = await Lesson.findAll({
+        where: { id: rows.map((r) => r.lessonId) },
+        order: [['position', 'ASC']],
+      });
+      expect(lessons.map((l) => l.position)).toEqual([1, 2, 3]);
+    } finally {
+      await d.close();
+    }
   });
 });

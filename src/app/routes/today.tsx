@@ -6,6 +6,8 @@ import { BackFromReviewPanel } from '@/features/reviews/components/back-from-rev
 import { WaitingPanel } from '@/features/reviews/components/waiting-panel';
 import { EntriesToReadPanel } from '@/features/bench-log/components/entries-to-read-panel';
 import { WeekHoursPanel } from '@/features/bench-log/components/week-hours-panel';
+import { ClassesGlancePanel } from '@/features/classes/components/classes-glance-panel';
+import { NextLessonPanel } from '@/features/courses/components/next-lesson-panel';
 
 /** "Today": what to do next. Each feature contributes its own panel for the roles it serves. */
 export function Component() {
@@ -23,10 +25,12 @@ export function Component() {
         }
       />
       <div className="grid gap-6 md:grid-cols-2">
-        {user.role === 'apprentice' && <BackFromReviewPanel />}
         {user.role === 'mentor' && <WaitingPanel />}
+        {user.role === 'apprentice' && <NextLessonPanel />}
+        {user.role === 'apprentice' && <BackFromReviewPanel />}
         {user.role === 'apprentice' && <WeekHoursPanel />}
         {user.role === 'mentor' && <EntriesToReadPanel />}
+        {user.role === 'mentor' && <ClassesGlancePanel />}
       </div>
     </>
   );
