@@ -9,10 +9,11 @@ export function useCreateReview(submissionId: number) {
   return useMutation({
     mutationFn: (input: ReviewInput) =>
       api(`/submissions/${submissionId}/reviews`, { method: 'POST', body: input, schema: SubmissionDTO }),
-    onSuccess: async () => {
-      // The piece itself is the submissions feature's query; its key is refreshed by prefix.
-      await client.invalidateQueries({ queryKey: ['submissions'] });
-      await client.invalidateQueries({ queryKey: reviewKeys.all });
+    onSuccess: () => {
+      // The piece is the submissions feature's query (refreshed by prefix). It is only marked stale here: refetching it
+      // while the review page is still open would swap the form for "not waiting" before the page moves on.
+      void client.invalidateQueries({ queryKey: ['submissions'], refetchType: 'none' });
+      return client.invalidateQueries({ queryKey: reviewKeys.all });
     },
   });
 }

@@ -70,7 +70,7 @@ export function PinBoard({ photo, index, pins, activeKey, onAdd, onMove, onSelec
           Drop a pin at the centre
         </Button>
       </div>
-      <div className="max-h-[75vh] overflow-auto rounded-md border border-rule bg-ink/5">
+      <div className="max-h-[70vh] overflow-auto rounded-md border border-rule bg-ink/5">
         <div className="relative" style={{ width: `${zoom}%` }}>
           {/* The click is a pointer shortcut; the button above and the arrow keys on a pin do the same from the keyboard. */}
           <img

@@ -66,7 +66,10 @@ export function ReviewForm({ submission, version }: { submission: SubmissionDTO;
         submit();
       }}
     >
-      <PinPanel photos={version.photos} pins={pins} onChange={setPins} />
+      {/* The photos stay in view while the mentor scrolls through the criteria. */}
+      <div className="lg:sticky lg:top-4 lg:max-h-[calc(100vh-2rem)] lg:self-start lg:overflow-y-auto">
+        <PinPanel photos={version.photos} pins={pins} onChange={setPins} />
+      </div>
       <div className="space-y-5">
         <section aria-labelledby="scores-title" className="space-y-3">
           <h3 id="scores-title" className="font-serif text-xl font-semibold">

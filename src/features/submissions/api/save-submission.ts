@@ -25,7 +25,10 @@ export function useSaveDraft() {
   });
 }
 
-/** Saves then sends: the piece goes to the mentors' queue. */
+/**
+ * Saves then sends: the piece goes to the mentors' queue. Queries are only marked stale, not refetched, while the form
+ * is on screen; the caller puts the sent piece in the cache as it moves to the piece's page.
+ */
 export function useSaveAndSend() {
   const client = useQueryClient();
   return useMutation({
@@ -33,6 +36,6 @@ export function useSaveAndSend() {
       const saved = await saveDraft(input);
       return api(`/submissions/${saved.id}/send`, { method: 'POST', schema: SubmissionDTO });
     },
-    onSettled: () => client.invalidateQueries({ queryKey: submissionKeys.all }),
+    onSettled: () => client.invalidateQueries({ queryKey: submissionKeys.all, refetchType: 'none' }),
   });
 }

@@ -1,5 +1,6 @@
 import { Save, Send } from 'lucide-react';
 import { useEffect, useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import { useNavigate } from 'react-router-dom';
 import { toast } from 'sonner';
 import type { LinkedRecord, SubmissionPhotoDTO } from '@shared/schemas/submission';
@@ -8,6 +9,7 @@ import { MarkdownField } from '@/components/ui/markdown-field';
 import { ErrorNotice } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { useSaveAndSend, useSaveDraft } from '../api/save-submission';
+import { submissionKeys } from '../api/submission-keys';
 import { LinkPicker } from './link-picker';
 import { PhotoTray } from './photo-tray';
 import { usePhotoTray } from './use-photo-tray';
@@ -30,6 +32,7 @@ interface Props {
 /** Photos, notes and links of one version of a piece; save it as a draft or send it for review. */
 export function SubmissionForm({ projectId, submissionId, start, versionNumber }: Props) {
   const navigate = useNavigate();
+  const client = useQueryClient();
   const tray = usePhotoTray(start.photos);
   const [notes, setNotes] = useState(start.notes);
   const [links, setLinks] = useState({
@@ -73,6 +76,7 @@ export function SubmissionForm({ projectId, submissionId, start, versionNumber }
         onSuccess: (sent) => {
           setDirty(false);
           toast.success('Sent for review. Your mentor has been told.');
+          client.setQueryData(submissionKeys.detail(sent.id), sent);
           navigate(paths.submission(sent.id));
         },
       },
