@@ -23,7 +23,7 @@ export type CourseCard = z.infer<typeof CourseCard>;
 export const CourseListReply = z.object({ courses: z.array(CourseCard) });
 export type CourseListReply = z.infer<typeof CourseListReply>;
 
-export const ProjectBadge = z.object({ id: Id, title: z.string() });
+const ProjectBadge = z.object({ id: Id, title: z.string() });
 
 export const LessonListItem = z.object({
   id: Id,

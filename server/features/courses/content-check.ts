@@ -8,7 +8,7 @@ import { parseLessonMarkdown } from './lesson-markdown';
 /** Names an image may have: what the image route will serve, and nothing that could climb out of the folder. */
 export const SAFE_IMAGE_NAME = /^[a-z0-9][a-z0-9._-]*\.(svg|png|jpe?g|webp)$/i;
 
-export interface ContentReport {
+interface ContentReport {
   problems: ContentProblem[];
   courses: number;
   lessons: number;

@@ -10,8 +10,8 @@ export function CautionBlock({ children }: { children: ReactNode }) {
       aria-labelledby={headingId}
       className="not-prose my-8 rounded-lg border-l-4 border-rework bg-rework/8 px-5 py-4 text-ink"
     >
-      <p id={headingId} className="flex items-center gap-2 font-serif text-lg font-semibold text-rework">
-        <TriangleAlert className="size-5 shrink-0" aria-hidden />
+      <p id={headingId} className="flex items-center gap-2 font-serif text-lg font-semibold text-ink">
+        <TriangleAlert className="size-5 shrink-0 text-rework" aria-hidden />
         Caution
       </p>
       <div className="mt-2 space-y-3 leading-relaxed [&_a]:text-steel [&_strong]:font-semibold [&_ul]:list-disc [&_ul]:pl-5">

@@ -7,7 +7,7 @@ import { CautionBlock } from './caution-block';
 import { remarkLesson } from './remark-lesson';
 
 /** Typography for reading at the bench: a column of about 70 characters, generous leading, the workshop palette. */
-export const LESSON_PROSE = [
+const LESSON_PROSE = [
   'prose prose-lg max-w-[70ch] text-ink',
   '[--tw-prose-body:var(--color-ink)] [--tw-prose-headings:var(--color-ink)] [--tw-prose-bold:var(--color-ink)]',
   '[--tw-prose-links:var(--color-steel)] [--tw-prose-bullets:var(--color-brass)] [--tw-prose-counters:var(--color-muted)]',
@@ -30,13 +30,33 @@ const components: Components = {
     const name = (props as Record<string, unknown>)['data-calculator'];
     return typeof name === 'string' ? <CalculatorEmbed name={name} /> : <div {...props} />;
   },
-  table: ({ node: _node, ...props }) => (
-    <div className="overflow-x-auto" role="region" aria-label="Table" tabIndex={0}>
+  // A wide table scrolls on its own; the scroll area is named by its column headings so each one is distinct.
+  table: ({ node, ...props }) => (
+    <div className="overflow-x-auto" role="region" aria-label={`Table: ${headings(node)}`} tabIndex={0}>
       <table {...props} />
     </div>
   ),
   img: ({ node: _node, alt, ...props }) => <img alt={alt ?? ''} loading="lazy" {...props} />,
+  // Checklists in a lesson are for the reader's eye; the boxes cannot be ticked, so they are not announced.
+  input: ({ node: _node, ...props }) => <input {...props} aria-hidden />,
 };
+
+type HastNode = { type: string; tagName?: string; value?: string; children?: HastNode[] };
+
+function hastText(node: HastNode): string {
+  return node.value ?? (node.children ?? []).map(hastText).join('');
+}
+
+/** The text of a table's header cells, e.g. "How opened, Taper error". */
+function headings(table: HastNode | undefined): string {
+  const cells: string[] = [];
+  const walk = (n: HastNode) => {
+    if (n.tagName === 'th') cells.push(hastText(n).trim());
+    else n.children?.forEach(walk);
+  };
+  if (table) walk(table);
+  return cells.filter(Boolean).join(', ') || 'lesson table';
+}
 
 const remarkRehypeOptions = {
   footnoteLabel: 'Sources and notes',

@@ -2,7 +2,7 @@ import type { Heading, Paragraph, Root, Text } from 'mdast';
 import { visit } from 'unist-util-visit';
 import { nodeText, uniqueHeadingIds } from '@shared/content/heading-ids';
 
-export interface RemarkLessonOptions {
+interface RemarkLessonOptions {
   /** Where the course's images/ folder is served, e.g. /api/content/<course>/images/. */
   imageBase: string;
 }
