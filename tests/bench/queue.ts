@@ -1,3 +1,4 @@
+import { availableParallelism, loadavg } from 'node:os';
 import { QueryTypes } from 'sequelize';
 import { User } from '../../server/features/auth/user.model';
 import { ClassMentor, Enrolment, GuildClass } from '../../server/features/classes/class.model';
@@ -83,6 +84,8 @@ async function fill(t: TestApp) {
   return { small, course };
 }
 
+/** Other work on the machine moves these figures; the load is printed with them. */
+const machine = () => `(load ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores)`;
 const stats = (xs: number[]) => {
   const s = [...xs].sort((a, b) => a - b);
   return { median: s[Math.floor(s.length / 2)], p95: s[Math.floor(s.length * 0.95)] };
@@ -101,7 +104,7 @@ export async function runQueueBench(): Promise<boolean> {
       { type: QueryTypes.SELECT },
     );
     console.log(
-      `Queue bench: ${total} submissions (${waiting} waiting), filled in ${((performance.now() - started) / 1000).toFixed(1)} s`,
+      `Queue bench: ${total} submissions (${waiting} waiting), filled in ${((performance.now() - started) / 1000).toFixed(1)} s ${machine()}`,
     );
     const admin = (await t.signIn('admin')).agent;
     const mentor = await t.signIn('mentor');

@@ -1,3 +1,4 @@
+import { availableParallelism, loadavg } from 'node:os';
 import { randomBytes } from 'node:crypto';
 import sharp from 'sharp';
 import { processImage } from '../../server/features/uploads/image-pipeline';
@@ -24,12 +25,16 @@ async function twelveMegapixelJpeg(): Promise<Buffer> {
     .toBuffer();
 }
 
+/** Other work on the machine moves these figures; the load is printed with them. */
+const machine = () => `(load ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores)`;
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 export async function runUploadBench(): Promise<boolean> {
   const photo = await twelveMegapixelJpeg();
   const meta = await sharp(photo).metadata();
-  console.log(`Upload bench: ${meta.width} × ${meta.height} px JPEG, ${(photo.length / 1024 / 1024).toFixed(1)} MB`);
+  console.log(
+    `Upload bench: ${meta.width} × ${meta.height} px JPEG, ${(photo.length / 1024 / 1024).toFixed(1)} MB ${machine()}`,
+  );
 
   await processImage(photo); // warm-up: the first call loads libvips' codecs
   const pipeline: number[] = [];

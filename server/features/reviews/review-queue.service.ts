@@ -50,12 +50,15 @@ async function scope(
   return { where, replacements, classIds };
 }
 
-const FROM = `FROM submissions s
-  JOIN projects p ON p.id = s.projectId
-  JOIN lessons l ON l.id = p.lessonId`;
-/** The people table is joined only when the page is sorted by name. */
-const fromFor = (sort: ReviewQueueQuery['sort']) =>
-  sort === 'apprentice' ? `${FROM} JOIN users u ON u.id = s.apprenticeId` : FROM;
+/** Only the tables a filter or the sort needs are joined: a plain count reads the submissions indexes alone. */
+function fromFor(q: Partial<Pick<ReviewQueueQuery, 'classId' | 'courseId' | 'sort'>>) {
+  const joins = ['FROM submissions s'];
+  if (q.classId || q.courseId || q.sort === 'project') {
+    joins.push('JOIN projects p ON p.id = s.projectId JOIN lessons l ON l.id = p.lessonId');
+  }
+  if (q.sort === 'apprentice') joins.push('JOIN users u ON u.id = s.apprenticeId');
+  return joins.join(' ');
+}
 
 export async function reviewQueue(
   sequelize: Sequelize,
@@ -67,10 +70,13 @@ export async function reviewQueue(
   if (!s) return empty;
   const where = s.where.join(' AND ');
   const dir = q.dir === 'desc' ? 'DESC' : 'ASC';
-  const [{ total }] = await sequelize.query<{ total: number }>(`SELECT COUNT(*) AS total ${FROM} WHERE ${where}`, {
-    replacements: s.replacements,
-    type: QueryTypes.SELECT,
-  });
+  const [{ total }] = await sequelize.query<{ total: number }>(
+    `SELECT COUNT(*) AS total ${fromFor({ ...q, sort: undefined })} WHERE ${where}`,
+    {
+      replacements: s.replacements,
+      type: QueryTypes.SELECT,
+    },
+  );
   // The page is chosen first on the narrow join; names, counts and the class are looked up for its rows only.
   const classFilter = s.classIds === 'all' ? '' : 'AND g.id IN (:classIds)';
   const rows = await sequelize.query<Record<string, string | number | null>>(
@@ -82,7 +88,7 @@ export async function reviewQueue(
               WHERE e.userId = pg.apprenticeId AND g.courseId = c.id ${classFilter}
               ORDER BY e.status = 'active' DESC, g.startsOn DESC LIMIT 1) AS className
      FROM (SELECT s.id, s.apprenticeId, s.projectId, s.currentVersion, s.sentAt, ${SORT_COLUMN[q.sort]} AS sortKey
-           ${fromFor(q.sort)} WHERE ${where}
+           ${fromFor(q)} WHERE ${where}
            ORDER BY ${SORT_COLUMN[q.sort]} ${dir}, s.sentAt ASC, s.id ${dir}
            LIMIT :limit OFFSET :offset) pg
      JOIN users u ON u.id = pg.apprenticeId
@@ -124,7 +130,7 @@ export async function queueCount(sequelize: Sequelize, viewer: UserDTO): Promise
   const s = await scope(viewer, {});
   if (!s) return 0;
   const [{ total }] = await sequelize.query<{ total: number }>(
-    `SELECT COUNT(*) AS total ${FROM} WHERE ${s.where.join(' AND ')}`,
+    `SELECT COUNT(*) AS total ${fromFor({})} WHERE ${s.where.join(' AND ')}`,
     {
       replacements: s.replacements,
       type: QueryTypes.SELECT,
