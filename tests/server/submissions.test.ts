@@ -146,3 +146,58 @@ describe('submissions', () => {
     expect((await mentor.agent.get('/api/submissions')).status).toBe(400);
   });
 });
+
+describe('linked records', () => {
+  async function insert(table: 'log_entries' | 'calculations', ownerId: number, title: string) {
+    const now = new Date();
+    const sql =
+      table === 'log_entries'
+        ? 'INSERT INTO log_entries (apprenticeId, date, minutes, title, notes, version, createdAt, updatedAt) VALUES (:ownerId, :date, 90, :title, "", 1, :now, :now)'
+        : 'INSERT INTO calculations (userId, calculator, title, inputs, results, warnings, createdAt, updatedAt) VALUES (:ownerId, "broach-taper", :title, "{}", "{}", "[]", :now, :now)';
+    await t.sequelize.query(sql, { replacements: { ownerId, title, now, date: '2026-10-02' } });
+    const [[row]] = (await t.sequelize.query(`SELECT MAX(id) AS id FROM ${table}`)) as [{ id: number }[], unknown];
+    return row.id;
+  }
+
+  it('when an apprentice links their own log entry and calculation, then the piece shows them by name and the picker offers them', async () => {
+    const { apprentices } = await makeClass(t);
+    const { agent, user } = apprentices[0];
+    const entry = await insert('log_entries', user.id, 'Broached the third-wheel holes');
+    const calc = await insert('calculations', user.id, 'Broach for the 1.0 mm pivot');
+    const options = await agent.get('/api/submissions/link-options');
+    expect(options.status).toBe(200);
+    expect(options.body.logEntries).toEqual([{ id: entry, label: '2026-10-02 · Broached the third-wheel holes' }]);
+    expect(options.body.calculations).toEqual([{ id: calc, label: 'Broach for the 1.0 mm pivot' }]);
+    const created = await agent
+      .post('/api/submissions')
+      .send({ projectId, logEntryIds: [entry], calculationIds: [calc] });
+    expect(created.status).toBe(201);
+    expect(created.body.versions[0].logEntries).toEqual([
+      { id: entry, label: '2026-10-02 · Broached the third-wheel holes' },
+    ]);
+    expect(created.body.versions[0].calculations).toEqual([{ id: calc, label: 'Broach for the 1.0 mm pivot' }]);
+    expect((await SubmissionVersion.findOne({ where: { submissionId: created.body.id } }))!.logEntryIds).toEqual([
+      entry,
+    ]);
+  });
+
+  it('when someone else’s log entry is linked, then it answers 400 naming logEntryIds', async () => {
+    const { apprentices } = await makeClass(t);
+    const other = await t.createUser('apprentice');
+    const theirs = await insert('log_entries', other.id, 'Not mine');
+    const res = await apprentices[0].agent.post('/api/submissions').send({ projectId, logEntryIds: [theirs] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields.logEntryIds).toBeDefined();
+  });
+
+  it('when a mentor, the admin or nobody asks for the apprentice-only routes, then they are refused', async () => {
+    const mentor = (await t.signIn('mentor')).agent;
+    const admin = (await t.signIn('admin')).agent;
+    for (const url of ['/api/submissions/link-options', `/api/submissions/projects/${projectId}`]) {
+      expect((await mentor.get(url)).status).toBe(403);
+      expect((await admin.get(url)).status).toBe(403);
+      expect((await t.anon().get(url)).status).toBe(401);
+    }
+    expect((await t.anon().get('/api/reviews')).status).toBe(401);
+  });
+});
