@@ -1,5 +1,6 @@
 import { fireEvent, render, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { useEffect } from 'react';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { ApiError } from '@/lib/api-client';
 import { PhotoTray } from '@/features/submissions/components/photo-tray';
@@ -20,10 +21,14 @@ const stored = (uploadId: number, caption: string, position: number) => ({
   thumbUrl: `/api/uploads/${uploadId}?size=thumb`,
 });
 
-let ready: { uploadId: number; caption: string }[] = [];
+type Ready = { uploadId: number; caption: string }[];
+let ready: Ready = [];
+const report = (r: Ready) => {
+  ready = r;
+};
 function Tray({ initial = [] as ReturnType<typeof stored>[] }) {
   const tray = usePhotoTray(initial);
-  ready = tray.ready;
+  useEffect(() => report(tray.ready));
   return <PhotoTray tray={tray} />;
 }
 
