@@ -3,6 +3,7 @@ import { Sequelize } from 'sequelize';
 import sqlite3 from 'sqlite3';
 
 export const DB_FILE = 'tickwright.sqlite';
+const BUSY_TIMEOUT_MS = 5000;
 
 /** One SQLite file per data folder: WAL so readers never wait for the writer, foreign keys enforced. */
 export async function openDatabase(dataDir: string): Promise<Sequelize> {
@@ -11,13 +12,26 @@ export async function openDatabase(dataDir: string): Promise<Sequelize> {
     dialectModule: sqlite3,
     storage: path.join(dataDir, DB_FILE),
     logging: false,
-    // SQLite has one writer; a single pooled connection makes transactions serialise instead of failing busy.
-    pool: { max: 1, min: 1, idle: 60_000 },
     retry: { max: 5, match: [/SQLITE_BUSY/] },
   });
+  waitWhenBusy(sequelize);
   await sequelize.query('PRAGMA journal_mode = WAL;');
-  await sequelize.query('PRAGMA foreign_keys = ON;');
-  await sequelize.query('PRAGMA busy_timeout = 5000;');
   await sequelize.query('PRAGMA synchronous = NORMAL;');
   return sequelize;
+}
+
+/**
+ * Sequelize opens a separate SQLite connection for each transaction (and turns foreign keys on for each). Every one
+ * of them also needs a busy timeout, or a writer that meets another's lock fails at once instead of waiting its turn.
+ */
+function waitWhenBusy(sequelize: Sequelize) {
+  const manager = sequelize.connectionManager as unknown as {
+    getConnection(options?: unknown): Promise<sqlite3.Database>;
+  };
+  const open = manager.getConnection.bind(manager);
+  manager.getConnection = async (options) => {
+    const connection = await open(options);
+    connection.configure('busyTimeout', BUSY_TIMEOUT_MS);
+    return connection;
+  };
 }

@@ -14,18 +14,19 @@ import { seedLessonProgress } from './seed-lesson-progress';
  * changes nothing. Feature seeds run after people and classes, in the order listed at the end.
  */
 export async function seedDemo(sequelize: Sequelize): Promise<void> {
-  await sequelize.transaction(async () => {
+  await sequelize.transaction(async (transaction) => {
     const passwordHash = await hashPassword(DEMO_PASSWORD);
     const users = new Map<string, User>();
     for (const p of DEMO_PEOPLE) {
       const [user] = await User.findOrCreate({
         where: { email: demoEmail(p.key) },
         defaults: { email: demoEmail(p.key), name: p.name, role: p.role, passwordHash },
+        transaction,
       });
       users.set(p.key, user);
     }
     for (const [key, spec] of Object.entries(DEMO_CLASSES)) {
-      const course = await Course.findOne({ where: { slug: spec.course } });
+      const course = await Course.findOne({ where: { slug: spec.course }, transaction });
       if (!course) continue;
       const [cls] = await GuildClass.findOrCreate({
         where: { name: spec.name },
@@ -36,11 +37,12 @@ export async function seedDemo(sequelize: Sequelize): Promise<void> {
           endsOn: spec.endsOn,
           capacity: spec.capacity,
         },
+        transaction,
       });
       for (const p of DEMO_PEOPLE.filter((x) => x.cls === key)) {
         const userId = users.get(p.key)!.id;
-        if (p.role === 'mentor') await ClassMentor.findOrCreate({ where: { classId: cls.id, userId } });
-        else await Enrolment.findOrCreate({ where: { classId: cls.id, userId } });
+        if (p.role === 'mentor') await ClassMentor.findOrCreate({ where: { classId: cls.id, userId }, transaction });
+        else await Enrolment.findOrCreate({ where: { classId: cls.id, userId }, transaction });
       }
     }
   });

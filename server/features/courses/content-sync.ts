@@ -12,7 +12,7 @@ export async function syncContent(sequelize: Sequelize, root: string, logger?: L
   const { courses, problems } = loadContent(root);
   for (const p of problems) logger?.warn(`${p.file}:${p.line} ${p.message}`);
   const now = new Date();
-  await sequelize.transaction(async () => {
+  await sequelize.transaction(async (transaction) => {
     const keptCourseIds: number[] = [];
     for (const c of courses) {
       const fields = {
@@ -27,8 +27,9 @@ export async function syncContent(sequelize: Sequelize, root: string, logger?: L
       const [course] = await Course.findOrCreate({
         where: { slug: c.meta.slug },
         defaults: { slug: c.meta.slug, ...fields },
+        transaction,
       });
-      await course.update(fields);
+      await course.update(fields, { transaction });
       keptCourseIds.push(course.id);
       const keptLessonIds: number[] = [];
       for (const l of c.lessons) {
@@ -43,24 +44,28 @@ export async function syncContent(sequelize: Sequelize, root: string, logger?: L
         const [lesson] = await Lesson.findOrCreate({
           where: { courseId: course.id, slug: l.slug },
           defaults: { courseId: course.id, slug: l.slug, ...lessonFields },
+          transaction,
         });
-        await lesson.update(lessonFields);
+        await lesson.update(lessonFields, { transaction });
         keptLessonIds.push(lesson.id);
-        const project = await Project.findOne({ where: { lessonId: lesson.id } });
+        const project = await Project.findOne({ where: { lessonId: lesson.id }, transaction });
         if (l.meta.project) {
           const p = { ...l.meta.project, retiredAt: null };
-          if (project) await project.update(p);
-          else await Project.create({ lessonId: lesson.id, ...p });
+          if (project) await project.update(p, { transaction });
+          else await Project.create({ lessonId: lesson.id, ...p }, { transaction });
         } else if (project && !project.retiredAt) {
-          await project.update({ retiredAt: now });
+          await project.update({ retiredAt: now }, { transaction });
         }
       }
       await Lesson.update(
         { retiredAt: now },
-        { where: { courseId: course.id, id: { [Op.notIn]: keptLessonIds }, retiredAt: null } },
+        { where: { courseId: course.id, id: { [Op.notIn]: keptLessonIds }, retiredAt: null }, transaction },
       );
     }
-    await Course.update({ retiredAt: now }, { where: { id: { [Op.notIn]: keptCourseIds }, retiredAt: null } });
+    await Course.update(
+      { retiredAt: now },
+      { where: { id: { [Op.notIn]: keptCourseIds }, retiredAt: null }, transaction },
+    );
   });
   markSearchStale(sequelize);
 }
