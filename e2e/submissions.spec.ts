@@ -116,3 +116,28 @@ test('a piece goes from the apprentice to the mentor, comes back for rework with
   await expect(ned.getByRole('heading', { name: 'Version 1' })).toBeVisible();
   await expect(ned.getByRole('heading', { name: 'Version 2' })).toBeVisible();
 });
+
+test('the pieces, queue and review pages have no accessibility violations that axe can find', async ({ browser }) => {
+  const { default: AxeBuilder } = await import('@axe-core/playwright');
+  const check = async (page: Page, url: string, ready: RegExp) => {
+    await page.goto(url);
+    await expect(page.getByRole('heading', { name: ready }).first()).toBeVisible();
+    const { violations } = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa']).analyze();
+    expect(violations.map((v) => `${url}: ${v.id} ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`)).toEqual([]);
+  };
+  const ned = await as(browser, demo.ned);
+  await check(ned, '/pieces', /My pieces/);
+  await ned.getByRole('link', { name: 'A pair of upright pivot holes' }).click();
+  await ned.waitForURL(/\/pieces\/\d+$/);
+  await check(ned, ned.url(), /A pair of upright pivot holes/);
+  await check(ned, '/notifications', /Notifications/);
+  const odile = await as(browser, demo.odile);
+  await check(odile, '/review', /To review/);
+  await odile
+    .getByRole('row')
+    .filter({ hasText: 'Ruth Ashdown' })
+    .getByRole('link', { name: /Review/ })
+    .click();
+  await odile.waitForURL(/\/review\/\d+$/);
+  await check(odile, odile.url(), /A pair of upright pivot holes/);
+});

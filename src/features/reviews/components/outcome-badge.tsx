@@ -7,7 +7,7 @@ export function OutcomeBadge({ outcome }: { outcome: Outcome }) {
       Passed
     </span>
   ) : (
-    <span className="inline-flex items-center rounded-full border border-rework/40 bg-rework/10 px-3 py-0.5 text-sm font-semibold text-rework">
+    <span className="inline-flex items-center rounded-full border border-rework bg-card px-3 py-0.5 text-sm font-semibold text-rework">
       Rework
     </span>
   );

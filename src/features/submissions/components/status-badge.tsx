@@ -3,7 +3,7 @@ import type { SubmissionStatus } from '@shared/schemas/submission';
 const LOOK: Record<SubmissionStatus, { label: string; className: string }> = {
   draft: { label: 'Draft', className: 'border-rule bg-paper text-muted' },
   waiting: { label: 'Waiting for review', className: 'border-steel/40 bg-steel/10 text-steel' },
-  rework: { label: 'Rework', className: 'border-rework/40 bg-rework/10 text-rework' },
+  rework: { label: 'Rework', className: 'border-rework bg-card text-rework' },
   // Green is kept for this one state only.
   passed: { label: 'Passed', className: 'border-passed bg-passed text-white' },
 };
