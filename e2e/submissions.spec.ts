@@ -73,14 +73,26 @@ test('a piece goes from the apprentice to the mentor, comes back for rework with
   const box = (await photo.boundingBox())!;
   await odile.mouse.click(box.x + box.width * 0.3, box.y + box.height * 0.4);
   await odile.getByLabel('Note for pin 1 (photo 1)').fill('Ragged flank on this tooth');
-  await expect(odile.getByRole('button', { name: /Pin 1: Ragged flank/ })).toBeVisible();
+  const pin = odile.getByRole('button', { name: /Pin 1: Ragged flank/ });
+  await expect(pin).toBeVisible();
+  // Dragged a little to the right, to where the flank really is.
+  await pin.hover();
+  const here = (await photo.boundingBox())!;
+  await odile.mouse.down();
+  await odile.mouse.move(here.x + here.width * 0.45, here.y + here.height * 0.5, { steps: 5 });
+  await odile.mouse.up();
   await scoreEvery(odile, /^2 nearly/);
   await expect(odile.getByText('below the pass mark')).toBeVisible();
   await expect(odile.getByRole('radio', { name: /^Passed/ })).toBeDisabled();
   await odile.getByRole('radio', { name: 'Rework' }).check();
   await odile.getByRole('textbox', { name: 'Comment' }).fill('The profile is right; clean up the flanks.');
+  const reviewUrl = odile.url();
   await odile.getByRole('button', { name: 'Send review' }).click();
   await expect(odile.getByRole('heading', { name: 'To review' })).toBeVisible();
+  const stored = await (await odile.request.get(`/api/submissions/${reviewUrl.split('/').pop()}`)).json();
+  const [storedPin] = stored.versions[0].review.pins;
+  expect(storedPin.x).toBeCloseTo(0.45, 1);
+  expect(storedPin.y).toBeCloseTo(0.5, 1);
 
   // The apprentice sees the pin and the scores, then sends a new version.
   await ned.goto(pieceUrl);

@@ -1,5 +1,5 @@
 import { Crosshair, ZoomIn } from 'lucide-react';
-import { useId, useState, type KeyboardEvent, type MouseEvent } from 'react';
+import { useId, useRef, useState, type KeyboardEvent, type MouseEvent, type PointerEvent } from 'react';
 import type { SubmissionPhotoDTO } from '@shared/schemas/submission';
 import { Button } from '@/components/ui/button';
 import { PinMarker } from './pin-marker';
@@ -33,6 +33,34 @@ export function PinBoard({ photo, index, pins, activeKey, onAdd, onMove, onSelec
   const zoomId = useId();
   const [zoom, setZoom] = useState(100);
   const label = photo.caption || `Photo ${index + 1}`;
+
+  const surface = useRef<HTMLDivElement>(null);
+  const drag = useRef<{ key: string; x: number; y: number; moved: boolean } | null>(null);
+  const justDragged = useRef(false);
+  const fraction = (clientX: number, clientY: number) => {
+    const box = surface.current!.getBoundingClientRect();
+    return [clamp((clientX - box.left) / box.width), clamp((clientY - box.top) / box.height)] as const;
+  };
+  // A pin can be dragged to correct where it was dropped; a press without movement is an ordinary click.
+  const dragStart = (key: string, e: PointerEvent<HTMLButtonElement>) => {
+    e.currentTarget.setPointerCapture(e.pointerId);
+    drag.current = { key, x: e.clientX, y: e.clientY, moved: false };
+  };
+  const dragMove = (key: string, e: PointerEvent<HTMLButtonElement>) => {
+    const d = drag.current;
+    if (!d || d.key !== key) return;
+    if (!d.moved && Math.hypot(e.clientX - d.x, e.clientY - d.y) < 4) return;
+    d.moved = true;
+    onMove(key, ...fraction(e.clientX, e.clientY));
+  };
+  const pressEnd = () => {
+    justDragged.current = Boolean(drag.current?.moved);
+    drag.current = null;
+  };
+  const choose = (key: string) => {
+    if (justDragged.current) justDragged.current = false;
+    else onSelect(key);
+  };
 
   const drop = (e: MouseEvent<HTMLImageElement>) => {
     const box = e.currentTarget.getBoundingClientRect();
@@ -71,7 +99,7 @@ export function PinBoard({ photo, index, pins, activeKey, onAdd, onMove, onSelec
         </Button>
       </div>
       <div className="max-h-[70vh] overflow-auto rounded-md border border-rule bg-ink/5">
-        <div className="relative" style={{ width: `${zoom}%` }}>
+        <div ref={surface} className="relative" style={{ width: `${zoom}%` }}>
           {/* The click is a pointer shortcut; the button above and the arrow keys on a pin do the same from the keyboard. */}
           <img
             src={zoom > 150 ? photo.url : photo.viewUrl}
@@ -89,9 +117,13 @@ export function PinBoard({ photo, index, pins, activeKey, onAdd, onMove, onSelec
               x={p.x}
               y={p.y}
               active={p.key === activeKey}
-              aria-label={`Pin ${p.number}${p.note ? `: ${p.note}` : ''}. Arrow keys move it; Shift moves it further.`}
-              onClick={() => onSelect(p.key)}
+              aria-label={`Pin ${p.number}${p.note ? `: ${p.note}` : ''}. Drag it, or use the arrow keys to move it; Shift moves it further.`}
+              onPointerDown={(e) => dragStart(p.key, e)}
+              onPointerMove={(e) => dragMove(p.key, e)}
+              onPointerUp={pressEnd}
+              onClick={() => choose(p.key)}
               onKeyDown={(e) => nudge(p, e)}
+              className="cursor-grab touch-none active:cursor-grabbing"
             />
           ))}
         </div>
