@@ -2,7 +2,6 @@ import type { ProjectCriterion } from '../schemas/content';
 
 /** The meaning of each score, the same for every criterion; a criterion's own `scores[n]` says what it looks like. */
 export const SCORE_WORDS = ['not shown', 'not yet', 'nearly', 'sound', 'exemplary'] as const;
-export const MAX_SCORE = SCORE_WORDS.length - 1;
 
 export type Scores = Record<string, number>;
 type Weighted = Pick<ProjectCriterion, 'key' | 'weight'>;

@@ -5,13 +5,12 @@ const Id = z.number().int().positive();
 const Unit = z.number().min(0, 'A pin must lie on the photo (0 to 1).').max(1, 'A pin must lie on the photo (0 to 1).');
 
 /** x and y are fractions of the photo's width and height from its top-left corner, so a pin lands right at every size. */
-export const PinInput = z.object({
+const PinInput = z.object({
   uploadId: Id,
   x: Unit,
   y: Unit,
   note: z.string().trim().min(1, 'Write what the pin points at.').max(1000, 'Keep a pin note under 1000 characters.'),
 });
-export type PinInput = z.infer<typeof PinInput>;
 
 export const ReviewInput = z.object({
   scores: z.record(

@@ -2,8 +2,7 @@ import { z } from 'zod';
 import { ProjectCriterion } from './content';
 import { UploadDTO } from './upload';
 
-export const SUBMISSION_STATUSES = ['draft', 'waiting', 'passed', 'rework'] as const;
-export const SubmissionStatus = z.enum(SUBMISSION_STATUSES);
+export const SubmissionStatus = z.enum(['draft', 'waiting', 'passed', 'rework']);
 export type SubmissionStatus = z.infer<typeof SubmissionStatus>;
 
 export const MAX_PHOTOS = 12;
@@ -14,11 +13,10 @@ const IdList = (what: string) =>
     .max(30, `Link at most 30 ${what}.`)
     .refine((ids) => new Set(ids).size === ids.length, `Each of the ${what} may be linked once.`);
 
-export const PhotoInput = z.object({
+const PhotoInput = z.object({
   uploadId: Id,
   caption: z.string().trim().max(300, 'Keep a caption under 300 characters.').default(''),
 });
-export type PhotoInput = z.infer<typeof PhotoInput>;
 
 /**
  * What the apprentice edits in a draft version; photos are in the order they will be shown. Fields left out keep their

@@ -4,7 +4,7 @@ import type { Mailer } from '../../lib/mailer';
 import { User } from '../auth/user.model';
 import { Notification } from './notification.model';
 
-export interface Notice {
+interface Notice {
   /** A short machine word for the kind of event, e.g. "submission-sent". */
   kind: string;
   title: string;
@@ -13,7 +13,7 @@ export interface Notice {
   link?: string | null;
 }
 
-export interface NotifyOptions {
+interface NotifyOptions {
   /** The app's origin, so that the e-mail carries a full link; without it the mail names the path only. */
   appUrl?: string;
   /** Set false for an in-app notice without e-mail. */

@@ -26,12 +26,12 @@ export async function projectSummary(projectId: number): Promise<ProjectSummary 
   };
 }
 
-export const photoDTO = (p: SubmissionPhoto & { upload?: Upload }): SubmissionPhotoDTO => {
+const photoDTO = (p: SubmissionPhoto & { upload?: Upload }): SubmissionPhotoDTO => {
   const { id: _id, ...urls } = uploadDTO(p.upload!);
   return { ...urls, uploadId: p.uploadId, position: p.position, caption: p.caption };
 };
 
-export const reviewDTO = (r: Review, mentor: Pick<User, 'id' | 'name'> | null | undefined): ReviewDTO => ({
+const reviewDTO = (r: Review, mentor: Pick<User, 'id' | 'name'> | null | undefined): ReviewDTO => ({
   id: r.id,
   versionId: r.versionId,
   mentor: { id: r.mentorId, name: mentor?.name ?? 'A former mentor' },

@@ -8,7 +8,7 @@ const HEIC = new Set(['image/heic', 'image/heif', 'image/heic-sequence', 'image/
 /** About 100 megapixels: far above any camera photo, low enough that a crafted file cannot exhaust memory. */
 const MAX_INPUT_PIXELS = 100_000_000;
 
-export interface ProcessedImage {
+interface ProcessedImage {
   sourceType: string;
   width: number;
   height: number;

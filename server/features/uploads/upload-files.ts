@@ -3,7 +3,7 @@ import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { UPLOAD_SIZES, type UploadSize } from '@shared/schemas/upload';
 
-export const uploadsDir = (dataDir: string) => path.join(dataDir, 'uploads');
+const uploadsDir = (dataDir: string) => path.join(dataDir, 'uploads');
 export const newFileKey = () => randomBytes(16).toString('hex');
 export const uploadFile = (dataDir: string, fileKey: string, size: UploadSize) =>
   path.join(uploadsDir(dataDir), `${fileKey}-${size}.jpg`);

@@ -15,7 +15,7 @@ const toSearch = (q: ReviewQueueQuery) => {
   return params.toString();
 };
 
-export const reviewQueueQueryOptions = (q: ReviewQueueQuery) =>
+const reviewQueueQueryOptions = (q: ReviewQueueQuery) =>
   queryOptions({
     queryKey: reviewKeys.queue(q),
     queryFn: () => api(`/review-queue?${toSearch(q)}`, { schema: ReviewQueuePage }),

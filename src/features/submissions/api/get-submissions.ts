@@ -3,13 +3,13 @@ import { LinkOptions, ProjectForPiece, SubmissionDTO, SubmissionList } from '@sh
 import { api } from '@/lib/api-client';
 import { submissionKeys } from './submission-keys';
 
-export const mySubmissionsQueryOptions = () =>
+const mySubmissionsQueryOptions = () =>
   queryOptions({ queryKey: submissionKeys.mine(), queryFn: () => api('/submissions', { schema: SubmissionList }) });
 
 /** The signed-in apprentice's pieces, the most recently changed first. */
 export const useMySubmissions = () => useQuery(mySubmissionsQueryOptions());
 
-export const submissionQueryOptions = (id: number) =>
+const submissionQueryOptions = (id: number) =>
   queryOptions({
     queryKey: submissionKeys.detail(id),
     queryFn: () => api(`/submissions/${id}`, { schema: SubmissionDTO }),

@@ -6,7 +6,7 @@ import { submissionKeys } from './submission-keys';
 type SaveInput = { id: number | null; projectId: number; draft: Required<SubmissionDraftPatch> };
 
 /** Creates the piece on its first save, and writes the draft on later ones. */
-export function saveDraft({ id, projectId, draft }: SaveInput) {
+function saveDraft({ id, projectId, draft }: SaveInput) {
   if (id === null) {
     const body: SubmissionCreateInput = { projectId, ...draft };
     return api('/submissions', { method: 'POST', body, schema: SubmissionDTO });

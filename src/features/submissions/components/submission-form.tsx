@@ -14,7 +14,7 @@ import { LinkPicker } from './link-picker';
 import { PhotoTray } from './photo-tray';
 import { usePhotoTray } from './use-photo-tray';
 
-export interface DraftStart {
+interface DraftStart {
   notes: string;
   photos: SubmissionPhotoDTO[];
   logEntries: LinkedRecord[];

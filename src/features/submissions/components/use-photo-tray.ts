@@ -4,7 +4,7 @@ import { UPLOAD_MAX_BYTES } from '@shared/schemas/upload';
 import { ApiError } from '@/lib/api-client';
 import { uploadPhoto } from '../api/upload-photo';
 
-export interface TrayPhoto {
+interface TrayPhoto {
   key: string;
   name: string;
   caption: string;
