@@ -5,8 +5,10 @@ import { Loading } from '@/components/ui/states';
 import { useMe } from '@/features/auth/api/get-me';
 import { UserMenu } from '@/features/auth/components/user-menu';
 import { BellLink } from '@/features/notifications/components/bell-link';
-import { NAV } from './nav';
+import { NAV, type NavItem } from './nav';
 import { NavBadge } from './nav-badge';
+
+const underPrefix = (pathname: string, prefix: string) => pathname === prefix || pathname.startsWith(`${prefix}/`);
 
 /** Header, role navigation and the page; anyone not signed in is sent to sign-in and brought back afterwards. */
 export function AppShell() {
@@ -14,6 +16,8 @@ export function AppShell() {
   const location = useLocation();
   if (isPending) return <Loading label="Opening Tickwright…" />;
   if (!user) return <Navigate to={paths.signIn(location.pathname + location.search)} replace />;
+  const marked = (item: NavItem, isActive: boolean) =>
+    isActive || (item.alsoOn ?? []).some((prefix) => underPrefix(location.pathname, prefix));
   return (
     <div className="min-h-screen">
       <a
@@ -31,7 +35,8 @@ export function AppShell() {
             <img src="/favicon.svg" alt="" className="size-7" />
             Tickwright
           </Link>
-          <nav aria-label="Main" className="flex flex-1 flex-wrap gap-1">
+          {/* Below laptop width the navigation takes its own row, so that no item wraps under another. */}
+          <nav aria-label="Main" className="order-last flex w-full flex-wrap gap-1 lg:order-none lg:w-auto lg:flex-1">
             {NAV[user.role].map((item) => (
               <NavLink
                 key={item.to}
@@ -39,7 +44,7 @@ export function AppShell() {
                 end={item.to === paths.home}
                 className={({ isActive }) =>
                   `flex min-h-11 items-center gap-2 rounded-md px-3 text-sm font-semibold no-underline ${
-                    isActive
+                    marked(item, isActive)
                       ? 'bg-brass/15 text-ink underline decoration-brass decoration-2 underline-offset-8'
                       : 'text-muted hover:text-ink'
                   }`
@@ -50,11 +55,14 @@ export function AppShell() {
               </NavLink>
             ))}
           </nav>
-          <BellLink />
-          <UserMenu user={user} />
+          <div className="ml-auto flex items-center gap-2">
+            <BellLink />
+            <UserMenu user={user} />
+          </div>
         </div>
       </header>
-      <main id="main" className="mx-auto max-w-6xl px-4 py-8">
+      {/* tabIndex lets the skip link move focus here, not only the scroll position. */}
+      <main id="main" tabIndex={-1} className="mx-auto max-w-6xl px-4 py-8 focus:outline-none">
         <Suspense fallback={<Loading />}>
           <Outlet />
         </Suspense>

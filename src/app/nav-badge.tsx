@@ -7,9 +7,12 @@ export function NavBadge({ name }: { name: NonNullable<NavItem['badge']> }) {
   const count = useBadgeCount(name);
   if (!count) return null;
   return (
-    <span className="num rounded-full bg-brass px-2 text-xs text-white" aria-label={`${count} waiting`}>
-      {count}
-    </span>
+    <>
+      <span className="num rounded-full bg-brass-dark px-2 text-xs text-white" aria-hidden>
+        {count}
+      </span>
+      <span className="sr-only">, {count} waiting</span>
+    </>
   );
 }
 

@@ -6,6 +6,8 @@ export interface NavItem {
   to: string;
   /** Name of a count shown beside the item (see app-shell's badge hooks). */
   badge?: 'reviewQueue';
+  /** Other address prefixes that belong under this item, so it stays marked there too. */
+  alsoOn?: string[];
 }
 
 /** Each role's navigation, in the words of the product brief. */
@@ -25,7 +27,7 @@ export const NAV: Record<Role, NavItem[]> = {
     { label: 'Calculators', to: paths.calculators },
   ],
   admin: [
-    { label: 'Guild office', to: paths.guildOffice },
+    { label: 'Guild office', to: paths.guildOffice, alsoOn: [paths.classes] },
     { label: 'Courses', to: paths.courses },
     { label: 'Calculators', to: paths.calculators },
   ],

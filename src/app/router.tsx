@@ -1,16 +1,41 @@
 import { createBrowserRouter } from 'react-router-dom';
+import { Loading } from '@/components/ui/states';
 import { AppShell } from './app-shell';
 import { RouteError } from './route-error';
 
+// Shown while the first page's code loads; without it the router renders nothing and warns.
+const opening = <Loading label="Opening Tickwright…" />;
+
 /** Created once, outside React; every page module is loaded on demand. */
 export const router = createBrowserRouter([
-  { path: '/sign-in', lazy: () => import('./routes/sign-in'), errorElement: <RouteError /> },
-  { path: '/invitation/:token', lazy: () => import('./routes/accept-invitation'), errorElement: <RouteError /> },
-  { path: '/forgot-password', lazy: () => import('./routes/forgot-password'), errorElement: <RouteError /> },
-  { path: '/reset-password/:token', lazy: () => import('./routes/reset-password'), errorElement: <RouteError /> },
+  {
+    path: '/sign-in',
+    lazy: () => import('./routes/sign-in'),
+    errorElement: <RouteError />,
+    hydrateFallbackElement: opening,
+  },
+  {
+    path: '/invitation/:token',
+    lazy: () => import('./routes/accept-invitation'),
+    errorElement: <RouteError />,
+    hydrateFallbackElement: opening,
+  },
+  {
+    path: '/forgot-password',
+    lazy: () => import('./routes/forgot-password'),
+    errorElement: <RouteError />,
+    hydrateFallbackElement: opening,
+  },
+  {
+    path: '/reset-password/:token',
+    lazy: () => import('./routes/reset-password'),
+    errorElement: <RouteError />,
+    hydrateFallbackElement: opening,
+  },
   {
     element: <AppShell />,
     errorElement: <RouteError />,
+    hydrateFallbackElement: opening,
     children: [
       { index: true, lazy: () => import('./routes/today') },
       // Feature pages are listed here, one line each.

@@ -15,14 +15,14 @@ export function Component() {
   if (isPending) return <Loading />;
   if (user) return <Navigate to={next} replace />;
   return (
-    <div className="mx-auto grid min-h-screen max-w-5xl items-center gap-10 px-4 py-10 md:grid-cols-2">
+    <main className="mx-auto grid min-h-screen max-w-5xl items-center gap-10 px-4 py-10 md:grid-cols-2">
       <section>
         <p className="flex items-center gap-3 font-serif text-4xl font-semibold">
           <img src="/favicon.svg" alt="" className="size-10" /> Tickwright
         </p>
-        <h1 className="mt-6 font-serif text-2xl text-ink">
+        <p className="mt-6 font-serif text-2xl text-ink">
           Learn clock-movement making at the bench, one made piece at a time.
-        </h1>
+        </p>
         <p className="mt-4 max-w-prose text-muted">
           Lessons with the bench arithmetic built in, a bench log of hours, measurements and photographs, and mentors
           who grade the pieces you send against clear criteria. The guild office enrols each class and keeps the record
@@ -30,9 +30,9 @@ export function Component() {
         </p>
       </section>
       <Card>
-        <h2 className="mb-4 font-serif text-xl">Sign in</h2>
+        <h1 className="mb-4 font-serif text-xl">Sign in</h1>
         <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
       </Card>
-    </div>
+    </main>
   );
 }

@@ -18,7 +18,14 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const parsed = LoginInput.safeParse({ email: form.get('email'), password: form.get('password') });
-    if (!parsed.success) return setErrors(z.flattenError(parsed.error).fieldErrors);
+    if (!parsed.success) {
+      const fieldErrors = z.flattenError(parsed.error).fieldErrors;
+      setErrors(fieldErrors);
+      // Focus goes to the first field to correct, as in the other forms.
+      const first = (['email', 'password'] as const).find((name) => fieldErrors[name]);
+      if (first) (e.currentTarget.elements.namedItem(first) as HTMLInputElement | null)?.focus();
+      return;
+    }
     setErrors({});
     signIn.mutate(parsed.data, { onSuccess: onSignedIn });
   }

@@ -15,7 +15,10 @@ export function UserMenu({ user }: { user: UserDTO }) {
         className="flex min-h-11 flex-col justify-center rounded-md px-2 no-underline hover:bg-rule/40"
       >
         <span className="font-semibold text-ink">{user.name}</span>
-        <span className="text-xs text-muted">{ROLE_LABEL[user.role]}</span>
+        <span className="text-xs text-muted">
+          {ROLE_LABEL[user.role]}
+          <span className="sr-only"> (my account)</span>
+        </span>
       </Link>
       <Button
         variant="secondary"
