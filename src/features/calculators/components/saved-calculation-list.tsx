@@ -1,9 +1,9 @@
 import { FolderOpen, Trash2 } from 'lucide-react';
-import { useState } from 'react';
 import { toast } from 'sonner';
 import { calculators, isCalculatorName } from '@shared/calc/index';
 import type { CalculationDTO } from '@shared/schemas/calculation';
-import { Button, ButtonLink } from '@/components/ui/button';
+import { ButtonLink } from '@/components/ui/button';
+import { ConfirmStep } from '@/components/ui/confirm-step';
 import { Card } from '@/components/ui/card';
 import { EmptyState, ErrorNotice, Loading } from '@/components/ui/states';
 import { paths } from '@/config/paths';
@@ -22,7 +22,6 @@ function reopenLink(c: CalculationDTO): string | null {
 }
 
 function SavedItem({ calculation: c }: { calculation: CalculationDTO }) {
-  const [confirming, setConfirming] = useState(false);
   const remove = useDeleteCalculation();
   const link = reopenLink(c);
   const calcTitle = isCalculatorName(c.calculator) ? calculators[c.calculator].title : c.calculator;
@@ -36,39 +35,30 @@ function SavedItem({ calculation: c }: { calculation: CalculationDTO }) {
             {c.warnings.length > 0 && ` · ${c.warnings.length} warning${c.warnings.length === 1 ? '' : 's'}`}
           </p>
         </div>
-        {confirming ? (
-          <div role="group" aria-label={`Delete ${c.title}?`} className="flex flex-wrap items-center gap-2">
-            <span className="text-sm">Delete “{c.title}” for good?</span>
-            <Button
-              variant="danger"
-              busy={remove.isPending}
-              onClick={() =>
-                remove.mutate(c.id, {
-                  onSuccess: () => toast.success('Saved result deleted'),
-                  onError: (err) => toast.error(err.message),
-                })
-              }
-            >
-              Yes, delete
-            </Button>
-            <Button variant="secondary" onClick={() => setConfirming(false)}>
-              Keep it
-            </Button>
-          </div>
-        ) : (
-          <div className="flex flex-wrap gap-2">
-            {link && (
-              <ButtonLink to={link} variant="secondary" aria-label={`Reopen ${c.title}`}>
-                <FolderOpen className="size-4" aria-hidden />
-                Reopen
-              </ButtonLink>
-            )}
-            <Button variant="quiet" aria-label={`Delete ${c.title}`} onClick={() => setConfirming(true)}>
-              <Trash2 className="size-4" aria-hidden />
-              Delete
-            </Button>
-          </div>
-        )}
+        <div className="flex flex-wrap items-center gap-2">
+          {link && (
+            <ButtonLink to={link} variant="secondary" aria-label={`Reopen ${c.title}`}>
+              <FolderOpen className="size-4" aria-hidden />
+              Reopen
+            </ButtonLink>
+          )}
+          <ConfirmStep
+            label={`Delete ${c.title}`}
+            question={`Delete “${c.title}” for good?`}
+            confirmLabel="Yes, delete"
+            keepLabel="Keep it"
+            busy={remove.isPending}
+            onConfirm={() =>
+              remove.mutate(c.id, {
+                onSuccess: () => toast.success('Saved result deleted'),
+                onError: (err) => toast.error(err.message),
+              })
+            }
+          >
+            <Trash2 className="size-4" aria-hidden />
+            Delete
+          </ConfirmStep>
+        </div>
       </Card>
     </li>
   );

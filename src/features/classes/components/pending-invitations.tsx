@@ -1,5 +1,6 @@
 import { toast } from 'sonner';
 import { Button } from '@/components/ui/button';
+import { ConfirmStep } from '@/components/ui/confirm-step';
 import { EmptyState, ErrorNotice, Loading } from '@/components/ui/states';
 import { useResendInvitation, useRevokeInvitation, usePendingInvitations } from '../api/invitations';
 import { formatWhen } from './format';
@@ -75,18 +76,19 @@ export function PendingInvitations({ classId }: { classId?: number }) {
                     >
                       Resend
                     </Button>
-                    <Button
-                      variant="quiet"
+                    <ConfirmStep
+                      label={`Revoke invitation to ${inv.email}`}
+                      question="The link stops working at once."
+                      confirmLabel="Revoke"
                       busy={revoke.isPending && revoke.variables === inv.id}
-                      aria-label={`Revoke invitation to ${inv.email}`}
-                      onClick={() =>
+                      onConfirm={() =>
                         revoke.mutate(inv.id, {
                           onSuccess: () => toast.success(`The invitation to ${inv.email} is revoked.`),
                         })
                       }
                     >
                       Revoke
-                    </Button>
+                    </ConfirmStep>
                   </span>
                 </td>
               </tr>

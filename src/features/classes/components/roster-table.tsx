@@ -1,12 +1,12 @@
-import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { toast } from 'sonner';
 import type { RosterEntry, RosterReply, RosterStatus } from '@shared/schemas/class';
 import { Button } from '@/components/ui/button';
+import { ConfirmStep } from '@/components/ui/confirm-step';
 import { EmptyState, ErrorNotice } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { useSetEnrolment } from '../api/save-class';
-import { formatWhen } from './format';
+import { formatDate } from './format';
 
 const STATUS_LABEL: Record<RosterStatus, string> = { active: 'Active', invited: 'Invited', withdrawn: 'Withdrawn' };
 const STATUS_STYLE: Record<RosterStatus, string> = {
@@ -78,7 +78,9 @@ export function RosterTable({ classId, roster, canEdit }: { classId: number; ros
                   <span className="num">{e.projectsPassed}</span> of <span className="num">{roster.projectsTotal}</span>{' '}
                   projects
                 </td>
-                <td className="p-3 whitespace-nowrap text-muted">{formatWhen(e.since)}</td>
+                <td className="p-3 whitespace-nowrap text-muted">
+                  <time dateTime={e.since}>{formatDate(e.since)}</time>
+                </td>
                 {canEdit && (
                   <td className="p-3 text-right">
                     <EnrolmentAction
@@ -119,7 +121,6 @@ function EnrolmentAction({
   busy: boolean;
   onAct: (a: 'withdraw' | 'reenrol') => void;
 }) {
-  const [confirming, setConfirming] = useState(false);
   if (entry.userId === null) return null;
   if (entry.status === 'withdrawn') {
     return (
@@ -128,28 +129,15 @@ function EnrolmentAction({
       </Button>
     );
   }
-  if (!confirming) {
-    return (
-      <Button variant="quiet" onClick={() => setConfirming(true)} aria-label={`Withdraw ${entry.name}`}>
-        Withdraw
-      </Button>
-    );
-  }
   return (
-    <span className="inline-flex flex-wrap justify-end gap-2">
-      <Button
-        variant="danger"
-        busy={busy}
-        onClick={() => {
-          setConfirming(false);
-          onAct('withdraw');
-        }}
-      >
-        Withdraw {entry.name.split(' ')[0]}
-      </Button>
-      <Button variant="quiet" onClick={() => setConfirming(false)}>
-        Keep
-      </Button>
-    </span>
+    <ConfirmStep
+      label={`Withdraw ${entry.name}`}
+      question={`${entry.name.split(' ')[0]} loses access to the class at once.`}
+      confirmLabel={`Withdraw ${entry.name.split(' ')[0]}`}
+      busy={busy}
+      onConfirm={() => onAct('withdraw')}
+    >
+      Withdraw
+    </ConfirmStep>
   );
 }

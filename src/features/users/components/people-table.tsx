@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { toast } from 'sonner';
 import { ROLES, type Role, type UserListItem } from '@shared/schemas/user';
 import { Button } from '@/components/ui/button';
+import { ConfirmStep } from '@/components/ui/confirm-step';
 import { ErrorNotice } from '@/components/ui/states';
 import { ROLE_LABEL } from '@/features/auth/role-labels';
 import { useUpdateUser } from '../api/users';
@@ -47,28 +48,13 @@ export function PeopleTable({ users, selfId }: { users: UserListItem[]; selfId: 
                     <div className="text-muted">{u.email}</div>
                   </td>
                   <td className="p-3">
-                    <label className="sr-only" htmlFor={`role-${u.id}`}>
-                      Role of {u.name}
-                    </label>
-                    <select
-                      id={`role-${u.id}`}
-                      value={u.role}
-                      disabled={self || update.isPending}
-                      onChange={(e) =>
-                        change(
-                          u,
-                          { role: e.target.value as Role },
-                          `${u.name} is now ${ROLE_LABEL[e.target.value as Role].toLowerCase()}.`,
-                        )
-                      }
-                      className="min-h-11 rounded-md border border-rule bg-white px-2"
-                    >
-                      {ROLES.map((r) => (
-                        <option key={r} value={r}>
-                          {ROLE_LABEL[r]}
-                        </option>
-                      ))}
-                    </select>
+                    <RoleChoice
+                      key={u.role}
+                      user={u}
+                      self={self}
+                      busy={update.isPending}
+                      onChange={(role) => change(u, { role }, `${u.name} is now ${ROLE_LABEL[role].toLowerCase()}.`)}
+                    />
                   </td>
                   <td className="p-3">{u.active ? 'Active' : <strong className="text-error">Deactivated</strong>}</td>
                   <td className="p-3 text-right">
@@ -100,7 +86,6 @@ export function PeopleTable({ users, selfId }: { users: UserListItem[]; selfId: 
 
 /** Deactivating signs the person out at once, so it asks once more in place; reactivating does not need to. */
 function AccountToggle({ user, busy, onToggle }: { user: UserListItem; busy: boolean; onToggle: () => void }) {
-  const [confirming, setConfirming] = useState(false);
   if (!user.active) {
     return (
       <Button variant="secondary" busy={busy} onClick={onToggle} aria-label={`Reactivate ${user.name}`}>
@@ -108,28 +93,69 @@ function AccountToggle({ user, busy, onToggle }: { user: UserListItem; busy: boo
       </Button>
     );
   }
-  if (!confirming) {
-    return (
-      <Button variant="quiet" onClick={() => setConfirming(true)} aria-label={`Deactivate ${user.name}`}>
-        Deactivate
-      </Button>
-    );
-  }
   return (
-    <span className="inline-flex flex-wrap justify-end gap-2">
-      <Button
-        variant="danger"
-        busy={busy}
-        onClick={() => {
-          setConfirming(false);
-          onToggle();
-        }}
+    <ConfirmStep
+      label={`Deactivate ${user.name}`}
+      question={`Sign ${user.name.split(' ')[0]} out everywhere and stop their sign-in?`}
+      confirmLabel="Deactivate and sign out"
+      busy={busy}
+      onConfirm={onToggle}
+    >
+      Deactivate
+    </ConfirmStep>
+  );
+}
+
+/**
+ * The new role is chosen first and applied with its own button: a select changes with the arrow keys, and a role
+ * must not change while someone is only moving through the list by keyboard.
+ */
+function RoleChoice({
+  user,
+  self,
+  busy,
+  onChange,
+}: {
+  user: UserListItem;
+  self: boolean;
+  busy: boolean;
+  onChange: (role: Role) => void;
+}) {
+  const [choice, setChoice] = useState<Role>(user.role);
+  const changed = choice !== user.role;
+  return (
+    <div className="flex flex-wrap items-center gap-2">
+      <label className="sr-only" htmlFor={`role-${user.id}`}>
+        Role of {user.name}
+      </label>
+      <select
+        id={`role-${user.id}`}
+        value={choice}
+        disabled={self || busy}
+        onChange={(e) => setChoice(e.target.value as Role)}
+        className="min-h-11 rounded-md border border-rule bg-white px-2"
       >
-        Deactivate and sign out
-      </Button>
-      <Button variant="quiet" onClick={() => setConfirming(false)}>
-        Keep
-      </Button>
-    </span>
+        {ROLES.map((r) => (
+          <option key={r} value={r}>
+            {ROLE_LABEL[r]}
+          </option>
+        ))}
+      </select>
+      {changed && (
+        <>
+          <Button
+            variant="secondary"
+            busy={busy}
+            aria-label={`Make ${user.name} ${ROLE_LABEL[choice].toLowerCase()}`}
+            onClick={() => onChange(choice)}
+          >
+            Change role
+          </Button>
+          <Button variant="quiet" onClick={() => setChoice(user.role)} aria-label={`Keep ${user.name}'s role`}>
+            Keep
+          </Button>
+        </>
+      )}
+    </div>
   );
 }
