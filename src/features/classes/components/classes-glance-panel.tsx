@@ -3,6 +3,7 @@ import { Card } from '@/components/ui/card';
 import { EmptyState, ErrorNotice, Loading } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { useClasses } from '../api/get-classes';
+import { formatDay } from './format';
 
 const CURRENT = { archived: 'false' } as const;
 
@@ -12,7 +13,7 @@ export function ClassesGlancePanel() {
   return (
     <Card>
       <h2 className="font-serif text-xl font-semibold">Your classes</h2>
-      {isPending && <Loading />}
+      {isPending && <Loading label="Loading your classes…" />}
       {error && <ErrorNotice error={error} />}
       {classes?.length === 0 && (
         <EmptyState title="No classes yet">
@@ -27,10 +28,11 @@ export function ClassesGlancePanel() {
                 {c.name}
               </Link>
               <p className="text-sm text-muted">
-                {c.course.title} · <span className="num">{c.startsOn}</span> to <span className="num">{c.endsOn}</span>
+                {c.course.title} · {formatDay(c.startsOn)} – {formatDay(c.endsOn)}
               </p>
               <p className="text-sm text-muted">
-                <span className="num">{c.counts.active}</span> active apprentices
+                <span className="num">{c.counts.active}</span> active{' '}
+                {c.counts.active === 1 ? 'apprentice' : 'apprentices'}
                 {c.counts.invited > 0 && (
                   <>
                     , <span className="num">{c.counts.invited}</span> invited

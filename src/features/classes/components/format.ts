@@ -4,6 +4,11 @@ export function formatDay(day: string): string {
   return new Date(y, m - 1, d).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 }
 
+/** The calendar day of an instant, for lists where the hour adds nothing (an enrolment's start). */
+export function formatDate(iso: string): string {
+  return new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+}
+
 export function formatWhen(iso: string): string {
   return new Date(iso).toLocaleString('en-GB', {
     day: 'numeric',

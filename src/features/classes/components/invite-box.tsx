@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from 'react';
-import type { InviteResult } from '@shared/schemas/invitation';
+import type { InviteOutcome, InviteResult } from '@shared/schemas/invitation';
 import { Button } from '@/components/ui/button';
 import { TextArea } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/states';
@@ -13,6 +13,8 @@ const splitAddresses = (text: string) =>
     .map((s) => s.trim())
     .filter(Boolean);
 
+const RETRY = new Set<InviteOutcome>(['bad-address', 'class-full']);
+
 export function InviteBox({ classId }: { classId: number }) {
   const [text, setText] = useState('');
   const [results, setResults] = useState<InviteResult[] | null>(null);
@@ -25,7 +27,13 @@ export function InviteBox({ classId }: { classId: number }) {
     send.mutate(emails, {
       onSuccess: (reply) => {
         setResults(reply.results);
-        setText('');
+        // Addresses that can still be put right stay in the box; the rest are done or need no retry.
+        setText(
+          reply.results
+            .filter((r) => RETRY.has(r.outcome))
+            .map((r) => r.email)
+            .join('\n'),
+        );
       },
     });
   }
