@@ -13,7 +13,7 @@ export function CourseTotals({ summary }: { summary: LogSummary }) {
           <th scope="col" className="py-2 pr-3 text-right font-semibold">
             Entries
           </th>
-          <th scope="col" className="py-2 text-right font-semibold">
+          <th scope="col" className="py-2 pl-4 text-right font-semibold">
             Time
           </th>
         </tr>
@@ -21,17 +21,21 @@ export function CourseTotals({ summary }: { summary: LogSummary }) {
       <tbody>
         {summary.courses.map((c) => (
           <tr key={c.course?.id ?? 'none'} className="border-b border-rule/60">
-            <td className="py-2 pr-3">{c.course?.title ?? 'No lesson chosen'}</td>
+            <th scope="row" className="py-2 pr-3 font-normal">
+              {c.course?.title ?? 'No lesson chosen'}
+            </th>
             <td className="num py-2 pr-3 text-right">{c.entries}</td>
-            <td className="num py-2 text-right whitespace-nowrap">{formatMinutes(c.minutes)}</td>
+            <td className="num py-2 pl-4 text-right whitespace-nowrap">{formatMinutes(c.minutes)}</td>
           </tr>
         ))}
       </tbody>
       <tfoot>
         <tr className="font-semibold">
-          <td className="py-2 pr-3">All</td>
+          <th scope="row" className="py-2 pr-3">
+            All
+          </th>
           <td className="num py-2 pr-3 text-right">{summary.entryCount}</td>
-          <td className="num py-2 text-right whitespace-nowrap">{formatMinutes(summary.totalMinutes)}</td>
+          <td className="num py-2 pl-4 text-right whitespace-nowrap">{formatMinutes(summary.totalMinutes)}</td>
         </tr>
       </tfoot>
     </table>

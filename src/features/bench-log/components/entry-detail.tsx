@@ -47,7 +47,9 @@ export function EntryDetail({ entry, viewer }: { entry: LogEntryDTO; viewer: Use
             {entry.lesson && (
               <>
                 {' · '}
-                <Link to={paths.lesson(entry.lesson.course.slug, entry.lesson.slug)}>{entry.lesson.title}</Link>
+                <Link to={paths.lesson(entry.lesson.course.slug, entry.lesson.slug)} className="underline">
+                  {entry.lesson.title}
+                </Link>
               </>
             )}
           </>

@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
+import { useId, useState } from 'react';
 import { Controller, useForm, type Path } from 'react-hook-form';
 import { toast } from 'sonner';
 import { localToday, type LogEntryDTO } from '@shared/schemas/log-entry';
@@ -44,6 +44,8 @@ export function EntryForm({ userId, entry, onSave, onSaved, onCancel }: Props) {
   const [photoError, setPhotoError] = useState<string>();
   const [failure, setFailure] = useState<unknown>(null);
   const uploading = photos.some((p) => !p.upload && !p.error);
+  const timeErrorId = useId();
+  const timeErrors = [errors.hours?.message, errors.minutes?.message].filter((m): m is string => Boolean(m));
 
   const submit = handleSubmit(async (values) => {
     setFailure(null);
@@ -82,17 +84,26 @@ export function EntryForm({ userId, entry, onSave, onSaved, onCancel }: Props) {
       <fieldset className="space-y-2">
         <legend className="text-sm font-semibold text-ink">Time spent</legend>
         <div className="flex flex-wrap items-end gap-3">
+          {/* The two boxes share one error line below them, so that a message never squeezes into a narrow column. */}
           <div className="w-24">
             <TextField
               label="Hours"
               inputMode="numeric"
               className="num"
+              aria-invalid={Boolean(errors.hours || errors.minutes)}
+              aria-describedby={timeErrors.length ? timeErrorId : undefined}
               {...register('hours')}
-              error={errors.hours?.message}
             />
           </div>
           <div className="w-24">
-            <TextField label="Minutes" inputMode="numeric" className="num" {...register('minutes')} />
+            <TextField
+              label="Minutes"
+              inputMode="numeric"
+              className="num"
+              aria-invalid={Boolean(errors.minutes)}
+              aria-describedby={timeErrors.length ? timeErrorId : undefined}
+              {...register('minutes')}
+            />
           </div>
           {!entry && (
             <BenchTimer
@@ -105,10 +116,12 @@ export function EntryForm({ userId, entry, onSave, onSaved, onCancel }: Props) {
             />
           )}
         </div>
-        {errors.minutes?.message && (
-          <p role="alert" className="text-sm font-medium text-error">
-            {errors.minutes.message}
-          </p>
+        {timeErrors.length > 0 && (
+          <div id={timeErrorId} role="alert" className="space-y-1 text-sm font-medium text-error">
+            {timeErrors.map((message) => (
+              <p key={message}>{message}</p>
+            ))}
+          </div>
         )}
       </fieldset>
       <TextArea

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useId, useState } from 'react';
 import { SCORE_WORDS } from '@shared/grading/score';
 import { GRADE_ASPECTS, GRADE_ASPECT_LABELS, type GradeAspect } from '@shared/schemas/log-entry';
 import { Button } from '@/components/ui/button';
@@ -18,11 +18,12 @@ export function GradeForm({ entryId }: { entryId: number }) {
   const [scores, setScores] = useState<Partial<Record<GradeAspect, number>>>({});
   const [comment, setComment] = useState('');
   const complete = GRADE_ASPECTS.every((a) => scores[a] !== undefined);
+  const headingId = useId();
 
   return (
     <form
       className="space-y-4"
-      aria-label="Grade this entry"
+      aria-labelledby={headingId}
       onSubmit={(e) => {
         e.preventDefault();
         if (!complete) return;
@@ -37,6 +38,15 @@ export function GradeForm({ entryId }: { entryId: number }) {
         );
       }}
     >
+      <div>
+        <h3 id={headingId} className="font-serif text-lg font-semibold">
+          Grade this entry
+        </h3>
+        <p className="text-sm text-muted">
+          Score each of the three, from <span className="num">0</span> not shown to <span className="num">4</span>{' '}
+          exemplary; the grade is saved once all three have a score.
+        </p>
+      </div>
       {GRADE_ASPECTS.map((aspect) => (
         <fieldset key={aspect}>
           <legend className="font-semibold">{GRADE_ASPECT_LABELS[aspect]}</legend>

@@ -21,7 +21,11 @@ export function ResultAttach({
       {isLoading && <p className="text-sm text-muted">Loading your saved results…</p>}
       {data && data.length === 0 && (
         <p className="text-sm text-muted">
-          None saved yet. Save a result from any <Link to={paths.calculators}>calculator</Link> to attach it here.
+          None saved yet. Save a result from any{' '}
+          <Link to={paths.calculators} className="underline">
+            calculator
+          </Link>{' '}
+          to attach it here.
         </p>
       )}
       {data && data.length > 0 && (
