@@ -51,8 +51,8 @@ describe('calculator shell (broach taper)', () => {
     const server = fakeServer();
     renderCalculator(broachTaperForm);
     await userEvent.click(screen.getByRole('radio', { name: /Imperial/ }));
-    // 1.05 mm / 25.4 = 0.041338583 in; 27.5 mm / 25.4 = 1.083 in (computed)
-    expect(field(/Target hole diameter/)).toHaveValue('0.041338583');
+    // 1.05 mm / 25.4 = 0.041338583 in, shown to 5 figures as 0.041339; 27.5 mm / 25.4 = 1.083 in (computed)
+    expect(field(/Target hole diameter/)).toHaveValue('0.041339');
     expect(resultOf('Insertion depth')).toBe('1.083 in');
     await waitFor(() =>
       expect(server).toHaveBeenCalledWith(

@@ -151,7 +151,7 @@ describe('unit toggle on the row editors', () => {
     renderForm('fusee');
     fireEvent.click(screen.getByLabelText(/Imperial/));
     const weight = screen.getByLabelText('Turn 1 weight (oz)');
-    expect(weight).toHaveValue('7.0547924');
+    expect(weight).toHaveValue('7.0548'); // 200 g / 28.349523125 = 7.0547924 oz, shown to 5 figures (computed)
     expect(screen.getByRole('columnheader', { name: 'Fusee radius (in)' })).toBeInTheDocument();
     // The first radius is the barrel's 15 mm chain radius: 0.5906 in (computed)
     expect(screen.getAllByTestId('radius-row')[0].querySelectorAll('td')[3]).toHaveTextContent('0.5906');

@@ -3,7 +3,7 @@ import type { Quantity } from '@shared/calc/types';
 import type { UnitSystem } from '@shared/schemas/user';
 import { FieldShell } from '@/components/ui/field';
 import { describeIssue } from '../lib/describe-issue';
-import { formatNumber, fromDisplay, toDisplay, unitLabel } from '../lib/units';
+import { formatNumber, fromDisplay, INPUT_FIGURES, toDisplay, unitLabel } from '../lib/units';
 import { useCalcForm } from './calculator-context';
 
 interface NumberFieldProps {
@@ -24,7 +24,7 @@ interface NumberFieldProps {
 function toText(canonical: string, quantity: Quantity, system: UnitSystem): string {
   const n = Number(canonical);
   if (canonical.trim() === '' || !Number.isFinite(n)) return canonical;
-  return system === 'metric' ? canonical : formatNumber(toDisplay(n, quantity, system), 8);
+  return system === 'metric' ? canonical : formatNumber(toDisplay(n, quantity, system), INPUT_FIGURES);
 }
 
 function toCanonical(text: string, quantity: Quantity, system: UnitSystem): string {

@@ -39,6 +39,12 @@ export function unitLabel(quantity: Quantity, system: UnitSystem): string {
   return c ? c[system] : FIXED[quantity];
 }
 
+/**
+ * Figures shown in an input box after conversion: what a bench measures, not the float's last digit. The draft keeps
+ * the exact mm, °C or g until the box is edited, so nothing is lost by showing fewer.
+ */
+export const INPUT_FIGURES = 5;
+
 /** A value in the calculator's unit shown in the user's unit system. */
 export function toDisplay(value: number, quantity: Quantity, system: UnitSystem): number {
   const c = CONVERTED[quantity];

@@ -2,6 +2,7 @@ import { Minus, Plus } from 'lucide-react';
 import { Button } from '@/components/ui/button';
 import { useCalcForm } from '../../components/calculator-context';
 import { describeIssue } from '../../lib/describe-issue';
+import { unitLabel } from '../../lib/units';
 import { CellInput } from '../row-cells/cell-input';
 import { writeRows } from '../row-cells/json-rows';
 import { EMPTY_ROWS, emptyRows, isBlankRow, readingRows, showsExample, type ReadingRow } from './readings';
@@ -41,8 +42,8 @@ export function ReadingsTable() {
       )}
       <div className="grid grid-cols-[2.5rem_1fr_1fr_auto] items-end gap-x-2 text-sm text-muted" aria-hidden>
         <span>Turn</span>
-        <span>Weight</span>
-        <span>Balance distance</span>
+        <span>Weight ({unitLabel('mass', unitSystem)})</span>
+        <span>Balance distance ({unitLabel('length', unitSystem)})</span>
         <span className="w-11" />
       </div>
       {rows.map((r, i) => (

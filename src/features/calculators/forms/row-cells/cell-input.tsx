@@ -2,7 +2,7 @@ import { useId, useState } from 'react';
 import type { Quantity } from '@shared/calc/types';
 import type { UnitSystem } from '@shared/schemas/user';
 import { useCalcForm } from '../../components/calculator-context';
-import { formatNumber, fromDisplay, toDisplay, unitLabel } from '../../lib/units';
+import { formatNumber, fromDisplay, INPUT_FIGURES, toDisplay, unitLabel } from '../../lib/units';
 
 interface CellInputProps {
   /** Read by screen readers, and shown above the box unless the table header already says it. */
@@ -20,7 +20,7 @@ interface CellInputProps {
 function shownText(canonical: string, quantity: Quantity, system: UnitSystem): string {
   const n = Number(canonical);
   if (canonical.trim() === '' || !Number.isFinite(n) || system === 'metric') return canonical;
-  return formatNumber(toDisplay(n, quantity, system), 8);
+  return formatNumber(toDisplay(n, quantity, system), INPUT_FIGURES);
 }
 
 function canonicalText(typed: string, quantity: Quantity, system: UnitSystem): string {

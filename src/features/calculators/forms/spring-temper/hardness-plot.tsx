@@ -29,7 +29,8 @@ export default function HardnessPlot({
       </figcaption>
       <div className="h-64 w-full" role="img" aria-label={`${label}, plotted from ${points.length} table points`}>
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={data} margin={{ top: 8, right: 16, bottom: 24, left: 8 }}>
+          {/* Inside an image with its own label: no focusable layer of its own. */}
+          <LineChart accessibilityLayer={false} data={data} margin={{ top: 8, right: 16, bottom: 24, left: 8 }}>
             <CartesianGrid stroke="#e3dccb" />
             <XAxis
               dataKey="temp"
