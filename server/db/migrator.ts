@@ -1,9 +1,10 @@
 import type { QueryInterface, Sequelize } from 'sequelize';
 import { SequelizeStorage, Umzug } from 'umzug';
 import * as m0001 from './migrations/0001-core';
-import * as m0003 from './migrations/0003-lesson-progress';
 import * as m0002 from './migrations/0002-password-resets';
+import * as m0003 from './migrations/0003-lesson-progress';
 import * as m0004 from './migrations/0004-calculations';
+import * as m0005 from './migrations/0005-submissions';
 import * as m0006 from './migrations/0006-bench-log';
 import * as m0007 from './migrations/0007-invitations-audit';
 
@@ -15,16 +16,20 @@ export type Migration = {
 /** Listed here rather than globbed, so the same list works under tsx, vitest and a bundled build. */
 const migrations: Record<string, Migration> = {
   '0001-core': m0001,
-  '0003-lesson-progress': m0003,
   '0002-password-resets': m0002,
+  '0003-lesson-progress': m0003,
   '0004-calculations': m0004,
+  '0005-submissions': m0005,
   '0006-bench-log': m0006,
   '0007-invitations-audit': m0007,
 };
 
 export function createMigrator(sequelize: Sequelize) {
   return new Umzug({
-    migrations: Object.entries(migrations).map(([name, m]) => ({ name, up: m.up, down: m.down })),
+    // Sorted by name, so the order never depends on where a line was added to the list above.
+    migrations: Object.entries(migrations)
+      .sort(([a], [b]) => a.localeCompare(b))
+      .map(([name, m]) => ({ name, up: m.up, down: m.down })),
     context: sequelize.getQueryInterface(),
     storage: new SequelizeStorage({ sequelize, tableName: 'migrations' }),
     logger: undefined,

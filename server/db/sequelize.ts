@@ -1,5 +1,5 @@
 import path from 'node:path';
-import { Sequelize } from 'sequelize';
+import { Sequelize, Transaction } from 'sequelize';
 import sqlite3 from 'sqlite3';
 
 export const DB_FILE = 'tickwright.sqlite';
@@ -12,6 +12,9 @@ export async function openDatabase(dataDir: string): Promise<Sequelize> {
     dialectModule: sqlite3,
     storage: path.join(dataDir, DB_FILE),
     logging: false,
+    // Take the write lock when a transaction begins: a transaction that reads and then writes cannot be granted the
+    // lock later (SQLite answers SQLITE_BUSY at once to avoid a deadlock), whereas waiting at BEGIN is safe.
+    transactionType: Transaction.TYPES.IMMEDIATE,
     retry: { max: 5, match: [/SQLITE_BUSY/] },
   });
   waitWhenBusy(sequelize);

@@ -1,4 +1,4 @@
-import { QueryTypes, Transaction, type Sequelize } from 'sequelize';
+import { QueryTypes, type Sequelize } from 'sequelize';
 import { grade } from '@shared/grading/score';
 import type { ReviewInput, RecentReview } from '@shared/schemas/review';
 import type { SubmissionDTO } from '@shared/schemas/submission';
@@ -46,7 +46,7 @@ export async function createReview(sequelize: Sequelize, viewer: UserDTO, submis
     throw AppError.notFound('That submission');
   }
   const project = (await Project.findByPk(found.projectId))!;
-  const review = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+  const review = await sequelize.transaction(async (transaction) => {
     const submission = (await Submission.findByPk(submissionId, { transaction }))!;
     if (submission.status !== 'waiting')
       throw AppError.conflict('This piece is not waiting for review; it may have been reviewed already.');

@@ -1,4 +1,4 @@
-import { Op, QueryTypes, Transaction, type Sequelize } from 'sequelize';
+import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import type {
   ProjectForPiece,
   SubmissionCreateInput,
@@ -93,7 +93,7 @@ export async function createSubmission(
   const existing = await Submission.findOne({ where: { apprenticeId: user.id, projectId }, attributes: ['id'] });
   if (existing)
     throw new AppError('ALREADY_STARTED', 'You have already started a piece for this project; carry on with it.', 409);
-  const id = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+  const id = await sequelize.transaction(async (transaction) => {
     const submission = await Submission.create(
       { apprenticeId: user.id, projectId, status: 'draft', currentVersion: 1 },
       { transaction },
@@ -127,7 +127,7 @@ export async function updateDraft(
   id: number,
   patch: SubmissionDraftPatch,
 ): Promise<SubmissionDTO> {
-  await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+  await sequelize.transaction(async (transaction) => {
     const submission = await ownSubmission(user, id, transaction);
     if (submission.status === 'waiting')
       throw AppError.conflict('This piece is waiting for review; it cannot be changed until it has been reviewed.');
@@ -165,7 +165,7 @@ export async function updateDraft(
 
 /** Sends the current draft for review; returns the piece and who was told (the caller notifies after commit). */
 export async function sendSubmission(sequelize: Sequelize, user: UserDTO, id: number) {
-  const sent = await sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, async (transaction) => {
+  const sent = await sequelize.transaction(async (transaction) => {
     const submission = await ownSubmission(user, id, transaction);
     if (submission.status === 'waiting') throw AppError.conflict('This piece is already waiting for review.');
     if (submission.status === 'passed') throw AppError.conflict('This piece has already passed.');
