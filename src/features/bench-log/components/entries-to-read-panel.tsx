@@ -1,17 +1,27 @@
 import { Link } from 'react-router-dom';
 import { formatMinutes } from '@shared/schemas/log-entry';
 import { Card } from '@/components/ui/card';
+import { ErrorNotice } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { useEntriesToRead } from '../api/get-log-summary';
 import { day } from '../lib/when';
 
 /** Today, for a mentor: their apprentices' newest log entries that nobody has graded yet. */
 export function EntriesToReadPanel() {
-  const { data } = useEntriesToRead();
+  const { data, error } = useEntriesToRead();
   return (
     <Card>
       <h2 className="font-serif text-xl font-semibold">Log entries to read</h2>
-      {!data && <p className="mt-2 text-muted">Looking…</p>}
+      {!data && !error && (
+        <p role="status" className="mt-2 text-muted">
+          Looking…
+        </p>
+      )}
+      {error && (
+        <div className="mt-2">
+          <ErrorNotice error={error} title="The entries to read could not be loaded" />
+        </div>
+      )}
       {data && data.total === 0 && <p className="mt-2 text-muted">Every entry of your apprentices has a grade.</p>}
       {data && data.total > 0 && (
         <>

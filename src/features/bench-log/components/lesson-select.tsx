@@ -12,9 +12,14 @@ type Props = SelectHTMLAttributes<HTMLSelectElement> & {
 
 /** A lesson, grouped by course. */
 export function LessonSelect({ error, hint, emptyLabel = 'No lesson (general bench work)', ...rest }: Props) {
-  const { data } = useLessonGroups();
+  const { data, error: loadError } = useLessonGroups();
   return (
-    <SelectField label="Lesson" error={error} hint={hint} {...rest}>
+    <SelectField
+      label="Lesson"
+      error={error ?? (loadError ? 'The lessons could not be loaded; reload the page to choose one.' : undefined)}
+      hint={hint}
+      {...rest}
+    >
       <option value="">{emptyLabel}</option>
       {data?.map((g) => (
         <optgroup key={g.course.id} label={g.course.title}>

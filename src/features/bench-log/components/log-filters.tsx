@@ -45,7 +45,7 @@ export function LogFilters({
         className={buttonClass('secondary', 'no-underline')}
       >
         <Download className="size-4" aria-hidden />
-        Export CSV
+        Download these entries (CSV)
       </a>
     </div>
   );

@@ -13,12 +13,17 @@ export function ResultAttach({
   onChange: (ids: number[]) => void;
   error?: string;
 }) {
-  const { data, isLoading } = useSavedResults();
+  const { data, isLoading, error: loadError } = useSavedResults();
   const toggle = (id: number, on: boolean) => onChange(on ? [...value, id] : value.filter((x) => x !== id));
   return (
     <fieldset className="space-y-2">
       <legend className="text-sm font-semibold text-ink">Saved calculator results</legend>
       {isLoading && <p className="text-sm text-muted">Loading your saved results…</p>}
+      {loadError && (
+        <p className="text-sm text-error">
+          Your saved results could not be loaded; the entry can be saved without them.
+        </p>
+      )}
       {data && data.length === 0 && (
         <p className="text-sm text-muted">
           None saved yet. Save a result from any{' '}
