@@ -19,7 +19,7 @@ export function Component() {
   const user = useUser();
   const cls = useClass(id);
   const [editing, setEditing] = useState(false);
-  if (cls.isPending) return <Loading />;
+  if (cls.isPending) return <Loading label="Loading the class…" />;
   if (cls.error) return <ErrorNotice error={cls.error} title="This class cannot be shown" />;
   const isAdmin = user.role === 'admin';
   const c = cls.data;
@@ -100,10 +100,15 @@ function Summary({ cls }: { cls: ClassDTO }) {
           </dd>
         </div>
         <div>
-          <dt className="text-sm text-muted">Open invitations</dt>
+          <dt className="text-sm text-muted">Seats left</dt>
           <dd>
-            <span className="num font-semibold">{cls.counts.invited}</span> ·{' '}
-            <span className="num">{cls.counts.seatsLeft}</span> seats left
+            <span className="num font-semibold">{cls.counts.seatsLeft}</span>
+            {cls.counts.invited > 0 && (
+              <span className="text-muted">
+                {' '}
+                · <span className="num">{cls.counts.invited}</span> held by open invitations
+              </span>
+            )}
           </dd>
         </div>
       </dl>
@@ -125,7 +130,7 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
 
 function Roster({ classId, canEdit }: { classId: number; canEdit: boolean }) {
   const roster = useRoster(classId);
-  if (roster.isPending) return <Loading />;
-  if (roster.error) return <ErrorNotice error={roster.error} />;
+  if (roster.isPending) return <Loading label="Loading the roster…" />;
+  if (roster.error) return <ErrorNotice error={roster.error} title="The roster could not be loaded" />;
   return <RosterTable classId={classId} roster={roster.data} canEdit={canEdit} />;
 }
