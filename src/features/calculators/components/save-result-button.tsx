@@ -1,5 +1,5 @@
 import { Save } from 'lucide-react';
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { toast } from 'sonner';
 import { CalculationTitle } from '@shared/schemas/calculation';
@@ -25,11 +25,23 @@ export function SaveResultButton({ calculator, defaultTitle, input }: SaveResult
   const { data: user } = useMe();
   const save = useSaveCalculation();
   const [title, setTitle] = useState<string | null>(null);
+  const box = useRef<HTMLDivElement>(null);
+  const backToButton = useRef(false);
+  // After saving or cancelling, focus goes back to "Save result" rather than to the top of the page.
+  useEffect(() => {
+    if (title !== null || !backToButton.current) return;
+    backToButton.current = false;
+    box.current?.querySelector('button')?.focus();
+  }, [title]);
+  const close = () => {
+    backToButton.current = true;
+    setTitle(null);
+  };
   if (user?.role !== 'apprentice') return null;
 
   if (title === null) {
     return (
-      <div className="no-print mt-4">
+      <div ref={box} className="no-print mt-4">
         <Button
           variant="secondary"
           disabled={!input}
@@ -43,7 +55,10 @@ export function SaveResultButton({ calculator, defaultTitle, input }: SaveResult
         </Button>
         {save.isSuccess && (
           <p className="mt-2 text-sm" role="status">
-            Saved. <Link to={paths.savedCalculations}>See your saved results</Link>
+            Saved.{' '}
+            <Link to={paths.savedCalculations} className="underline">
+              See your saved results
+            </Link>
           </p>
         )}
       </div>
@@ -57,7 +72,7 @@ export function SaveResultButton({ calculator, defaultTitle, input }: SaveResult
       { calculator, inputs: input, title: check.data },
       {
         onSuccess: () => {
-          setTitle(null);
+          close();
           toast.success('Result saved');
         },
       },
@@ -85,7 +100,7 @@ export function SaveResultButton({ calculator, defaultTitle, input }: SaveResult
         <Button type="submit" busy={save.isPending} disabled={!input || !check.success}>
           Save
         </Button>
-        <Button variant="quiet" onClick={() => setTitle(null)}>
+        <Button variant="quiet" onClick={close}>
           Cancel
         </Button>
       </div>
