@@ -148,7 +148,7 @@ test('when the guild office arrows through a role list and opens a confirm step 
   await deactivate.focus();
   await page.keyboard.press('Enter');
   await expect(page.getByRole('group', { name: /Sign Hollis out everywhere/ })).toBeVisible();
-  await expect(page.getByRole('button', { name: 'Keep' })).toBeFocused();
+  await expect(page.getByRole('button', { name: 'Keep', exact: true })).toBeFocused();
   await page.keyboard.press('Escape');
   await expect(deactivate).toBeFocused();
   await expect(page.getByRole('row').filter({ hasText: 'Hollis Dunstable' })).toContainText('Active');
