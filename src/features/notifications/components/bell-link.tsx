@@ -18,7 +18,7 @@ export function BellLink() {
       {unread > 0 && (
         <span
           aria-hidden
-          className="num absolute -top-0.5 -right-0.5 min-w-5 rounded-full bg-brass px-1 text-center text-xs leading-5 text-white"
+          className="num absolute -top-0.5 -right-0.5 min-w-5 rounded-full bg-brass-dark px-1 text-center text-xs leading-5 text-white"
         >
           {unread > 99 ? '99+' : unread}
         </span>

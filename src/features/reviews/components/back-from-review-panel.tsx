@@ -27,7 +27,7 @@ export function BackFromReviewPanel() {
                 </Link>
                 <p className="text-xs text-muted">
                   Version <span className="num">{r.version}</span> · {r.mentor.name} · score{' '}
-                  <span className="num">{formatScore(r.weightedScore)}</span>
+                  <span className="num">{formatScore(r.weightedScore)}</span> of <span className="num">4</span>
                   {r.pinCount > 0 && (
                     <>
                       {' '}
