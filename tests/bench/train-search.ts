@@ -17,6 +17,8 @@ export function runTrainSearchBench(): boolean {
     worst = Math.max(worst, (performance.now() - started) / 5);
   }
   const ok = worst <= BUDGET_MS;
-  console.log(`Train search (best ten): worst ${worst.toFixed(1)} ms per search (budget ${BUDGET_MS} ms) ${ok ? 'OK' : 'OVER BUDGET'}`);
+  console.log(
+    `Train search (best ten): worst ${worst.toFixed(1)} ms per search (budget ${BUDGET_MS} ms) ${ok ? 'OK' : 'OVER BUDGET'}`,
+  );
   return ok;
 }
