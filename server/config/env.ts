@@ -3,7 +3,11 @@ import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { z } from 'zod';
 
-const port = z.coerce.number().int().min(0).max(65535);
+const port = z.coerce
+  .number({ error: 'must be a port number (0 to 65535)' })
+  .int('must be a port number (0 to 65535)')
+  .min(0, 'must be a port number (0 to 65535)')
+  .max(65535, 'must be a port number (0 to 65535)');
 
 const EnvSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
