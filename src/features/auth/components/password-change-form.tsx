@@ -2,17 +2,15 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
 import { z } from 'zod';
-import { PASSWORD_MIN, PasswordChangeInput } from '@shared/schemas/user';
+import { PasswordChangeInput } from '@shared/schemas/user';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/states';
 import { useChangePassword } from '../api/account';
 import { showFieldErrors } from './field-errors';
+import { NewPasswordFields, withRepeat } from './new-password-fields';
 
-const ChangeForm = PasswordChangeInput.extend({ repeat: z.string() }).refine((v) => v.repeat === v.newPassword, {
-  path: ['repeat'],
-  message: 'The two new passwords are not the same.',
-});
+const ChangeForm = withRepeat(PasswordChangeInput, 'newPassword');
 type ChangeForm = z.infer<typeof ChangeForm>;
 
 export function PasswordChangeForm() {
@@ -43,20 +41,11 @@ export function PasswordChangeForm() {
         error={errors.currentPassword?.message}
         {...register('currentPassword')}
       />
-      <TextField
-        label="New password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
-        error={errors.newPassword?.message}
-        {...register('newPassword')}
-      />
-      <TextField
-        label="New password again"
-        type="password"
-        autoComplete="new-password"
-        error={errors.repeat?.message}
-        {...register('repeat')}
+      <NewPasswordFields
+        password={register('newPassword')}
+        repeat={register('repeat')}
+        passwordError={errors.newPassword?.message}
+        repeatError={errors.repeat?.message}
       />
       {change.isError && !placedOnFields && <ErrorNotice error={change.error} title="Password not changed" />}
       <Button type="submit" busy={change.isPending}>

@@ -2,18 +2,16 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { z } from 'zod';
-import { NewPassword, PASSWORD_MIN } from '@shared/schemas/user';
+import { NewPassword } from '@shared/schemas/user';
 import { Button, ButtonLink } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { useResetPassword } from '../api/password-reset';
 import { showFieldErrors } from './field-errors';
+import { NewPasswordFields, withRepeat } from './new-password-fields';
 
-const ResetForm = z
-  .object({ password: NewPassword, repeat: z.string() })
-  .refine((v) => v.repeat === v.password, { path: ['repeat'], message: 'The two passwords are not the same.' });
+const ResetForm = withRepeat(z.object({ password: NewPassword }), 'password');
 type ResetForm = z.infer<typeof ResetForm>;
 
 export function ResetPasswordForm({ token }: { token: string }) {
@@ -49,20 +47,11 @@ export function ResetPasswordForm({ token }: { token: string }) {
       )}
       className="space-y-4"
     >
-      <TextField
-        label="New password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
-        error={errors.password?.message}
-        {...register('password')}
-      />
-      <TextField
-        label="New password again"
-        type="password"
-        autoComplete="new-password"
-        error={errors.repeat?.message}
-        {...register('repeat')}
+      <NewPasswordFields
+        password={register('password')}
+        repeat={register('repeat')}
+        passwordError={errors.password?.message}
+        repeatError={errors.repeat?.message}
       />
       {error && !errors.password && <ErrorNotice error={error} title="Password not set" />}
       <div className="flex flex-wrap items-center justify-between gap-3">

@@ -2,17 +2,14 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { AcceptInvitationInput, type InvitationPreview } from '@shared/schemas/invitation';
-import { PASSWORD_MIN } from '@shared/schemas/user';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/states';
 import { showFieldErrors } from '@/features/auth/components/field-errors';
+import { NewPasswordFields, withRepeat } from '@/features/auth/components/new-password-fields';
 import { useAcceptInvitation } from '../api/accept-invitation';
 
-const AcceptForm = AcceptInvitationInput.extend({ repeat: z.string() }).refine((v) => v.repeat === v.password, {
-  path: ['repeat'],
-  message: 'The two passwords are not the same.',
-});
+const AcceptForm = withRepeat(AcceptInvitationInput, 'password');
 type AcceptForm = z.infer<typeof AcceptForm>;
 
 /** Name and a password: all a new apprentice needs; the e-mail address is the one the invitation went to. */
@@ -50,20 +47,13 @@ export function AcceptInvitationForm({
         error={errors.name?.message}
         {...register('name')}
       />
-      <TextField
+      <NewPasswordFields
         label="Choose a password"
-        type="password"
-        autoComplete="new-password"
-        hint={`At least ${PASSWORD_MIN} characters.`}
-        error={errors.password?.message}
-        {...register('password')}
-      />
-      <TextField
-        label="Password again"
-        type="password"
-        autoComplete="new-password"
-        error={errors.repeat?.message}
-        {...register('repeat')}
+        repeatLabel="Password again"
+        password={register('password')}
+        repeat={register('repeat')}
+        passwordError={errors.password?.message}
+        repeatError={errors.repeat?.message}
       />
       {accept.error && !errors.password && !errors.name && (
         <ErrorNotice error={accept.error} title="Could not accept the invitation" />

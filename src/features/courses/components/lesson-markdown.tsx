@@ -65,8 +65,8 @@ const remarkRehypeOptions = {
 };
 
 /**
- * A lesson (or course introduction) rendered from its Markdown. Raw HTML in the text is never rendered: without
- * rehype-raw, react-markdown drops it.
+ * A lesson (or course introduction) rendered from its Markdown. Raw HTML in the text is never rendered:
+ * react-markdown drops it, and no plugin here turns it back on.
  */
 export function LessonMarkdown({ body, courseSlug }: { body: string; courseSlug: string }) {
   const remarkPlugins = useMemo<Options['remarkPlugins']>(
