@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { User } from '../../server/features/auth/user.model';
 import { Enrolment } from '../../server/features/classes/class.model';
 import { Invitation } from '../../server/features/classes/invitation.model';
-import { hashInvitationToken } from '../../server/features/classes/invitation-token';
+import { hashLinkToken } from '../../server/lib/link-token';
 import { makeClass, tokenFromMail } from './support/classes-fixture';
 import { createTestApp, type TestApp } from './support/test-app';
 
@@ -62,7 +62,7 @@ describe('inviting by e-mail', () => {
     const rows = await Invitation.findAll({ where: { classId: cls.id } });
     expect(rows.map((r) => r.email)).toEqual(['new.person@example.test']);
     const token = tokenFromMail(mailTo('new.person@example.test')[0].text);
-    expect(rows[0].tokenHash).toBe(hashInvitationToken(token));
+    expect(rows[0].tokenHash).toBe(hashLinkToken(token));
     expect(rows[0].tokenHash).not.toContain(token);
     const days = (rows[0].expiresAt.getTime() - Date.now()) / DAY_MS;
     expect(days).toBeGreaterThan(13.99);

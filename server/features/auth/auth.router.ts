@@ -6,6 +6,7 @@ import { AppError } from '../../lib/app-error';
 import type { Mailer } from '../../lib/mailer';
 import { parseBody } from '../../lib/validate';
 import { requireAuth, currentUser } from './guards';
+import { startSignedInSession } from './session';
 import { requestPasswordReset, resetLinkGone, resetPassword } from './password-reset.service';
 import { signInLimits } from './sign-in-limits';
 
@@ -23,9 +24,7 @@ export function authRouter(deps: { mailer: Mailer; appUrl: string }) {
     req.body = input;
     const user = await authenticate(req);
     if (!user) throw new AppError('BAD_CREDENTIALS', 'That e-mail and password do not match an active account.', 401);
-    // A fresh session id at sign-in, so that an id planted before sign-in is worth nothing after it.
-    await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
-    await new Promise<void>((resolve, reject) => req.login(user, (err) => (err ? reject(err) : resolve())));
+    await startSignedInSession(req, user);
     res.json({ user });
   });
 

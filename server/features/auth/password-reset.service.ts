@@ -1,5 +1,5 @@
-import { createHash, randomBytes } from 'node:crypto';
 import { AppError } from '../../lib/app-error';
+import { hashLinkToken, newLinkToken } from '../../lib/link-token';
 import type { Mailer } from '../../lib/mailer';
 import { endSessions } from './auth.service';
 import { hashPassword } from './passwords';
@@ -7,8 +7,6 @@ import { PasswordReset } from './password-reset.model';
 import { User } from './user.model';
 
 const VALID_FOR_MS = 60 * 60 * 1000;
-
-const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
 
 export const resetLinkGone = () =>
   new AppError(
@@ -21,13 +19,8 @@ export const resetLinkGone = () =>
 export async function requestPasswordReset(email: string, mailer: Mailer, appUrl: string): Promise<void> {
   const user = await User.findOne({ where: { email } });
   if (!user?.active) return;
-  const token = randomBytes(32).toString('base64url');
-  await PasswordReset.create({
-    userId: user.id,
-    tokenHash: hashToken(token),
-    expiresAt: new Date(Date.now() + VALID_FOR_MS),
-    usedAt: null,
-  });
+  const { token, tokenHash, expiresAt } = newLinkToken(VALID_FOR_MS);
+  await PasswordReset.create({ userId: user.id, tokenHash, expiresAt, usedAt: null });
   await mailer.send({
     to: user.email,
     subject: 'Set a new Tickwright password',
@@ -47,7 +40,7 @@ export async function requestPasswordReset(email: string, mailer: Mailer, appUrl
 
 /** Sets the new password, spends the token and every other open one of the user, and ends all their sessions. */
 export async function resetPassword(token: string, password: string): Promise<void> {
-  const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) } });
+  const reset = await PasswordReset.findOne({ where: { tokenHash: hashLinkToken(token) } });
   const user = reset ? await User.findByPk(reset.userId) : null;
   if (!reset || !user?.active || reset.usedAt || reset.expiresAt.getTime() <= Date.now()) throw resetLinkGone();
   const passwordHash = await hashPassword(password);

@@ -3,6 +3,8 @@ import session from 'express-session';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { Sequelize } from 'sequelize';
+import type { Request } from 'express';
+import type { UserDTO } from '@shared/schemas/user';
 import type { Config } from '../../config/env';
 import { findActiveUser, verifyCredentials } from './auth.service';
 
@@ -56,4 +58,10 @@ export function sessionMiddleware(sequelize: Sequelize, config: Config) {
       passport.session(),
     ],
   };
+}
+
+/** Signs a user in on this request with a fresh session id, so an id planted before sign-in is worth nothing after. */
+export async function startSignedInSession(req: Request, user: UserDTO): Promise<void> {
+  await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+  await new Promise<void>((resolve, reject) => req.login(user, (err) => (err ? reject(err) : resolve())));
 }

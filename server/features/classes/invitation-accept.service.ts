@@ -8,7 +8,7 @@ import { User } from '../auth/user.model';
 import { Course } from '../courses/course.model';
 import { Enrolment, GuildClass } from './class.model';
 import { Invitation } from './invitation.model';
-import { hashInvitationToken } from './invitation-token';
+import { hashLinkToken } from '../../lib/link-token';
 
 /** One answer for unknown, used, revoked and expired links, so a guessed token learns nothing. */
 const gone = () =>
@@ -22,7 +22,7 @@ const TOKEN = /^[A-Za-z0-9_-]{20,100}$/;
 
 async function findUsable(token: string) {
   if (!TOKEN.test(token)) throw gone();
-  const invitation = await Invitation.findOne({ where: { tokenHash: hashInvitationToken(token) } });
+  const invitation = await Invitation.findOne({ where: { tokenHash: hashLinkToken(token) } });
   if (!invitation || invitation.acceptedAt || invitation.revokedAt || invitation.expiresAt <= new Date()) throw gone();
   const cls = await GuildClass.findByPk(invitation.classId);
   if (!cls || cls.archivedAt) throw gone();

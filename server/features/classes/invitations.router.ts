@@ -14,6 +14,7 @@ import type { Logger } from '../../lib/logger';
 import type { Mailer } from '../../lib/mailer';
 import { idParam, parseBody, parseQuery } from '../../lib/validate';
 import { currentUser, requireRole } from '../auth/guards';
+import { startSignedInSession } from '../auth/session';
 import { acceptInvitation, previewInvitation } from './invitation-accept.service';
 import {
   inviteToClass,
@@ -128,9 +129,7 @@ export function invitationsRouter(deps: InvitationDeps) {
   router.post('/:token/accept', linkLimit, async (req, res) => {
     const input = parseBody(AcceptInvitationInput, req);
     const user = await acceptInvitation(String(req.params.token), input);
-    // A fresh session for the new account, as at sign-in.
-    await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
-    await new Promise<void>((resolve, reject) => req.login(user, (err) => (err ? reject(err) : resolve())));
+    await startSignedInSession(req, user);
     res.status(201).json({ user });
   });
 
