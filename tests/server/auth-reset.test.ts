@@ -74,6 +74,17 @@ describe('password reset by e-mail', () => {
     expect(await PasswordReset.count({ where: { userId: gone.id } })).toBe(0);
   });
 
+  it('when the reset page checks a link, then an open one answers 204 and a spent or unknown one 410', async () => {
+    const user = await t.createUser('apprentice');
+    const token = await requestLink(user.email);
+    expect((await t.anon().get(`/api/auth/password-reset/${token}`)).status).toBe(204);
+    await t.anon().post(`/api/auth/password-reset/${token}`).send({ password: NEW_PASSWORD });
+    const spent = await t.anon().get(`/api/auth/password-reset/${token}`);
+    expect(spent.status).toBe(410);
+    expect(spent.body.error.code).toBe('RESET_LINK_GONE');
+    expect((await t.anon().get('/api/auth/password-reset/not-a-real-token')).status).toBe(410);
+  });
+
   it('when a link is more than an hour old, then it answers 410 and the password stays', async () => {
     const user = await t.createUser('mentor');
     const token = await requestLink(user.email);

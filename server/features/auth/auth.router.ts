@@ -7,7 +7,7 @@ import type { Mailer } from '../../lib/mailer';
 import { parseBody } from '../../lib/validate';
 import { requireAuth, currentUser } from './guards';
 import { startSignedInSession } from './session';
-import { requestPasswordReset, resetLinkGone, resetPassword } from './password-reset.service';
+import { findOpenReset, requestPasswordReset, resetLinkGone, resetPassword } from './password-reset.service';
 import { signInLimits } from './sign-in-limits';
 
 const RESET_REQUESTED = {
@@ -45,6 +45,14 @@ export function authRouter(deps: { mailer: Mailer; appUrl: string }) {
     // address has an account. A failure afterwards still reaches the error handler, which logs it.
     res.status(202).json(RESET_REQUESTED);
     await requestPasswordReset(email, deps.mailer, deps.appUrl);
+  });
+
+  // Lets the reset page say at once that a link is spent, before anyone types a new password.
+  router.get('/password-reset/:token', async (req, res) => {
+    const token = ResetToken.safeParse(req.params.token);
+    if (!token.success) throw resetLinkGone();
+    await findOpenReset(token.data);
+    res.status(204).end();
   });
 
   router.post('/password-reset/:token', async (req, res) => {

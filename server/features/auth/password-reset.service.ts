@@ -38,11 +38,17 @@ export async function requestPasswordReset(email: string, mailer: Mailer, appUrl
   });
 }
 
-/** Sets the new password, spends the token and every other open one of the user, and ends all their sessions. */
-export async function resetPassword(token: string, password: string): Promise<void> {
+/** The open reset and its user, or the 410 that a used, expired or unknown link answers. */
+export async function findOpenReset(token: string) {
   const reset = await PasswordReset.findOne({ where: { tokenHash: hashLinkToken(token) } });
   const user = reset ? await User.findByPk(reset.userId) : null;
   if (!reset || !user?.active || reset.usedAt || reset.expiresAt.getTime() <= Date.now()) throw resetLinkGone();
+  return { reset, user };
+}
+
+/** Sets the new password, spends the token and every other open one of the user, and ends all their sessions. */
+export async function resetPassword(token: string, password: string): Promise<void> {
+  const { reset, user } = await findOpenReset(token);
   const passwordHash = await hashPassword(password);
   await User.sequelize!.transaction(async (transaction) => {
     const usedAt = new Date();

@@ -1,4 +1,4 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { PasswordResetRequested, type PasswordResetInput, type PasswordResetRequest } from '@shared/schemas/user';
 import { api } from '@/lib/api-client';
 import { authKeys } from './auth-keys';
@@ -22,3 +22,11 @@ export function useResetPassword(token: string) {
     },
   });
 }
+
+/** Whether a reset link is still open: the page asks before showing the form (a spent link answers 410). */
+export const useResetLinkCheck = (token: string) =>
+  useQuery({
+    queryKey: ['auth', 'password-reset', token],
+    queryFn: () => api(`/auth/password-reset/${encodeURIComponent(token)}`).then(() => true),
+    staleTime: Infinity,
+  });

@@ -7,7 +7,7 @@ import { Button, ButtonLink } from '@/components/ui/button';
 import { ErrorNotice } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
-import { useResetPassword } from '../api/password-reset';
+import { useResetLinkCheck, useResetPassword } from '../api/password-reset';
 import { showFieldErrors } from './field-errors';
 import { NewPasswordFields, withRepeat } from './new-password-fields';
 
@@ -16,9 +16,12 @@ type ResetForm = z.infer<typeof ResetForm>;
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const resetPassword = useResetPassword(token);
+  const linkCheck = useResetLinkCheck(token);
   const { register, handleSubmit, setError, formState } = useForm<ResetForm>({ resolver: zodResolver(ResetForm) });
   const { errors } = formState;
-  const error = resetPassword.error;
+  // Only a spent link matters before sending; any other trouble with the check is left to the send to report.
+  const spentOnArrival = linkCheck.error instanceof ApiError && linkCheck.error.status === 410 ? linkCheck.error : null;
+  const error = resetPassword.error ?? spentOnArrival;
 
   if (resetPassword.isSuccess) {
     return (
