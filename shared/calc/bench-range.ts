@@ -14,9 +14,11 @@ export const figure = (n: number) => String(Number(n.toPrecision(4)));
 export const withUnit = (n: number, unit: string) =>
   unit === '' ? figure(n) : `${figure(n)}${unit === '°' || unit === '%' ? '' : ' '}${unit}`;
 
+export const inBench = (value: number, range: BenchRange) => value >= range.min && value <= range.max;
+
 /** The warning for a figure outside its bench range, or null when it lies inside. */
 export function outsideBench(what: string, value: number, range: BenchRange, unit: string): string | null {
-  if (value >= range.min && value <= range.max) return null;
+  if (inBench(value, range)) return null;
   const span = `${figure(range.min)}–${figure(range.max)}${unit === '' ? '' : ` ${unit}`}`;
   return `${what} of ${withUnit(value, unit)} is far outside bench practice (about ${span}): check the figure before trusting the result.`;
 }
