@@ -12,7 +12,7 @@ export const figure = (n: number) => String(Number(n.toPrecision(4)));
 
 /** A figure with its unit; degrees sit on the figure (1.4°), every other unit takes a space (27.5 mm). */
 export const withUnit = (n: number, unit: string) =>
-  unit === '' ? figure(n) : `${figure(n)}${unit === '°' || unit === '%' ? '' : ' '}${unit}`;
+  unit === '' ? figure(n) : `${figure(n)}${unit === '°' ? '' : ' '}${unit}`;
 
 export const inBench = (value: number, range: BenchRange) => value >= range.min && value <= range.max;
 

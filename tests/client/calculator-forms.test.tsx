@@ -63,4 +63,22 @@ describe('spring temper form', () => {
     expect(resultOf('Force at the tip')).toBe('0.1856 N');
     expect(resultOf('Root stress')).toBe('123.8 MPa');
   });
+
+  it('when a steel click spring is bent past its elastic limit, then no force is shown and the warning gives the ratio', () => {
+    fakeServer();
+    renderCalculator(springTemperForm, {
+      search: '?mode=click-spring&widthMm=2&thicknessMm=1&lengthMm=5&deflectionMm=0.5',
+    });
+    // σ = 1.5 × 206 000 × 1 × 0.5 / 25 = 6180 MPa against 895 MPa (computed; limit from the ASM Metals Handbook figure)
+    expect(resultOf('Force at the tip')).toBe('not reached');
+    expect(resultOf('Root stress, by the elastic formula')).toBe('6180 MPa');
+    expect(screen.getByText(/6180 MPa is 6\.905 × the elastic limit of 895 MPa/)).toBeInTheDocument();
+  });
+
+  it('when O1 is chosen, then the flat-spring temper from its data sheet is shown in whole HRC', () => {
+    fakeServer();
+    renderCalculator(springTemperForm);
+    // Eastern Tool Steel O-1 data sheet: 800 °F/425 °C 49 HRC, 900 °F/480 °C 44 HRC
+    expect(resultOf('Temper for a flat spring (about 44–50 HRC)')).toBe('425 °C to 480 °C, 49–44 HRC');
+  });
 });
