@@ -179,6 +179,9 @@ describe('wheel and pinion form', () => {
     expect(await screen.findByText(/A lantern pinion needs the trundle diameter|Enter a number/)).toBeInTheDocument();
     await userEvent.type(screen.getByLabelText(/^Trundle diameter/), '0.9');
     expect(figure('Trundle in the tooth space')).toBe('does not fit');
+    await retype(screen.getByLabelText(/^Trundle diameter/), '0.78');
+    // 0.785 − 0.78 = 0.005 mm of play, under a tenth of the tooth space (computed): not "fits"
+    expect(figure('Trundle in the tooth space')).toBe('too tight');
     await retype(screen.getByLabelText(/^Trundle diameter/), '0.7');
     expect(figure('Trundle in the tooth space')).toBe('fits');
   });
