@@ -12,14 +12,15 @@ describe('pivot & burnish form', () => {
   it('when the friction comes from the table or is typed, then the torque and speed follow the chosen figure', async () => {
     fakeServer();
     renderCalculator(pivotBurnishForm);
-    // TRADE.md §2: F = 10 N, a = 0.75 mm, σ_allow = 200 MPa -> d_min = 0.726 mm (computed)
-    expect(resultOf('Smallest safe diameter')).toBe('0.7256 mm');
-    // μ 0.19 brass on steel, lubricated (Schneider Co. chart): T = 0.19 × 10 N × 0.5 mm = 0.95 N·mm (computed)
-    expect(resultOf('Friction torque')).toBe('0.95 N·mm');
+    // The lesson's third arbor: F = 1.42 N, a = 0.75 mm, σ_allow = 200 MPa ->
+    // d_min = (32 × 1.42 × 0.75 / (π × 200))^(1/3) = 0.3785 mm (computed)
+    expect(resultOf('Smallest safe diameter')).toBe('0.3785 mm');
+    // μ 0.19 brass on steel, lubricated (Schneider Co. chart): T = 0.19 × 1.42 N × 0.5 mm = 0.1349 N·mm (computed)
+    expect(resultOf('Friction torque')).toBe('0.1349 N·mm');
     await userEvent.selectOptions(screen.getByRole('combobox', { name: 'Friction coefficient' }), 'typed');
     await userEvent.clear(screen.getByRole('textbox', { name: /Friction coefficient μ/ }));
     await userEvent.type(screen.getByRole('textbox', { name: /Friction coefficient μ/ }), '0.11');
-    expect(resultOf('Friction torque')).toBe('0.55 N·mm'); // 0.11 × 10 × 0.5 (computed)
+    expect(resultOf('Friction torque')).toBe('0.0781 N·mm'); // 0.11 × 1.42 × 0.5 (computed)
     await userEvent.selectOptions(screen.getByRole('combobox', { name: 'Surface speed for turning' }), 'typed');
     await userEvent.clear(screen.getByRole('textbox', { name: /Surface speed/ }));
     await userEvent.type(screen.getByRole('textbox', { name: /Surface speed/ }), '30');
