@@ -202,7 +202,7 @@ describe('train and pendulum form', () => {
     // HyperPhysics "Rod pendulum": uniform rod 1.5 m → L_eq = 1.000 m, T = 2.00641 s
     renderForm('train-pendulum');
     fireEvent.click(screen.getByLabelText('Uniform rod'));
-    expect(figure("Your pendulum's equivalent simple length")).toBe('1000\u00a0mm');
+    expect(figure("Your pendulum's equivalent simple length")).toBe('1000.0\u00a0mm'); // to 0.1 mm, what is measured
     expect(figure("Your pendulum's full period")).toBe('2.00641\u00a0s');
   });
 
