@@ -31,9 +31,10 @@ test('when five adjusting-rod readings are entered, then the spring and fusee to
   await expect(plot.locator('.recharts-line-curve')).toHaveCount(2);
   await expect(plot.getByText('Spring torque (at the barrel)')).toBeVisible();
   await expect(plot.getByText('Torque at the fusee arbor')).toBeVisible();
-  // TRADE.md §6: r = Q·R_b/T, so the radii fall as the torque rises: 10, 7.5, 6, 5, 4 mm (computed).
+  // TRADE.md §6: r = r_max·T_min/T, so the radii fall as the torque rises: 10, 7.5, 6, 5, 4 mm, shown to 0.01 mm
+  // (computed).
   const radii = page.getByTestId('radius-row').locator('td:nth-child(4)');
-  await expect(radii).toHaveText(['10', '7.5', '6', '5', '4']);
+  await expect(radii).toHaveText(['10.00', '7.50', '6.00', '5.00', '4.00']);
   await expect(page).toHaveURL(/readings=/);
 });
 

@@ -19,19 +19,27 @@ test('when an apprentice types into the broach calculator, then the insertion de
 
   await fill(page, /Taper of the broach/, '0.02');
   await fill(page, /Broach diameter at your reference mark/, '0.50');
+  await page
+    .getByRole('combobox', { name: /Section of the cutting broach/ })
+    .selectOption({ label: 'Round, or readings already cutting diameters' });
   await fill(page, /Target hole diameter/, '1.2');
-  await expect(result(page, 'Insertion depth')).toHaveText(/^35\s*mm$/); // (1.2 − 0.5) / 0.02 (computed)
+  // Round broach, 2 mm plate opened from both faces: (1.2 − 0.5) / 0.02 + 2/2 = 36 mm (computed)
+  await expect(result(page, 'Insertion depth')).toHaveText(/^36\s*mm$/);
+  await page
+    .getByRole('combobox', { name: /Section of the cutting broach/ })
+    .selectOption({ label: 'Five sides (read corner to flat)' });
   await fill(page, /Target hole diameter/, '1.05');
-  // TRADE.md §1: taper 0.02 mm/mm, reference 0.50 mm, target 1.05 mm -> 27.5 mm (computed)
-  await expect(result(page, 'Insertion depth')).toHaveText(/^27\.5\s*mm$/);
+  // The broaching lesson's five-sided broach: 1.05 mm at mid-plate -> 23.49 mm (computed; tests/shared/calc)
+  await expect(result(page, 'Insertion depth')).toHaveText(/^23\.49\s*mm$/);
   await expect(page).toHaveURL(/targetDiameterMm=1\.05/);
+  await expect(result(page, 'Hole at the entry face')).toHaveText(/^1\.072\s*mm$/);
 
   await page.getByRole('radio', { name: /Imperial/ }).check();
-  await expect(result(page, 'Insertion depth')).toHaveText(/^1\.083\s*in$/); // 27.5 mm / 25.4 (computed)
+  await expect(result(page, 'Insertion depth')).toHaveText(/^0\.9247\s*in$/); // 23.487 mm / 25.4 (computed)
   await page.reload();
-  await expect(result(page, 'Insertion depth')).toHaveText(/^1\.083\s*in$/);
+  await expect(result(page, 'Insertion depth')).toHaveText(/^0\.9247\s*in$/);
   await page.getByRole('radio', { name: /Metric/ }).check();
-  await expect(result(page, 'Insertion depth')).toHaveText(/^27\.5\s*mm$/);
+  await expect(result(page, 'Insertion depth')).toHaveText(/^23\.49\s*mm$/);
 });
 
 test('when an apprentice saves a result, then it is there after signing in anew and reopens with its inputs', async ({
@@ -45,7 +53,7 @@ test('when an apprentice saves a result, then it is there after signing in anew 
   await fill(page, /Target hole diameter/, '1.05');
   await fill(page, /Plate thickness/, '2');
   await fill(page, /Pivot diameter/, '1');
-  await expect(result(page, 'Insertion depth')).toHaveText(/^27\.5\s*mm$/);
+  await expect(result(page, 'Insertion depth')).toHaveText(/^23\.49\s*mm$/);
   await page.getByRole('button', { name: 'Save result' }).click();
   await page.getByRole('textbox', { name: 'Title for this result' }).fill(title);
   await page.getByRole('button', { name: 'Save', exact: true }).click();
@@ -60,7 +68,7 @@ test('when an apprentice saves a result, then it is there after signing in anew 
   await item.getByRole('link', { name: `Reopen ${title}` }).click();
   await expect(page).toHaveURL(/\/calculators\/broach-taper\?/);
   await expect(page.getByRole('textbox', { name: /Target hole diameter/ })).toHaveValue('1.05');
-  await expect(result(page, 'Insertion depth')).toHaveText(/^27\.5\s*mm$/);
+  await expect(result(page, 'Insertion depth')).toHaveText(/^23\.49\s*mm$/);
 
   await page.goBack();
   await item.getByRole('button', { name: `Delete ${title}` }).click();

@@ -28,12 +28,13 @@ test('when Ned goes from the course list into the broaching lesson, then its cal
   await expect(page.getByRole('heading', { level: 1, name: BROACHING })).toBeVisible();
   await expect(page.getByRole('note', { name: 'Caution' }).first()).toBeVisible();
 
-  // TRADE.md §1: x = (D_target − D_ref)/k; with the form's k = 0.02 and D_ref = 0.50 mm, a 1.10 mm hole needs
-  // (1.10 − 0.50)/0.02 = 30 mm of insertion (computed).
+  // The lesson's five-sided broach (k = 0.02 read corner to flat, 0.50 mm at the mark), a 2 mm plate opened from both
+  // faces: 1.10 mm at mid-plate needs an entry of 1.1221 mm, read 1.01495 mm at the mark, so
+  // (1.01495 − 0.50)/0.02 = 25.75 mm of insertion (computed).
   const target = page.getByLabel(/Target hole diameter/);
   await target.fill('1.1');
   const depth = page.locator('dl div').filter({ has: page.locator('dt', { hasText: 'Insertion depth' }) });
-  await expect(depth.locator('dd').first()).toHaveText(/^30\s*mm$/);
+  await expect(depth.locator('dd').first()).toHaveText(/^25\.75\s*mm$/);
 
   const done = page.getByRole('button', { name: 'Mark as done' });
   if ((await done.getAttribute('aria-pressed')) === 'true') await done.click();

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { outsideBench, pushWarnings, type BenchRange } from './bench-range';
 import type { Calculator, CalcStep } from './types';
 
 interface PlateSet {
@@ -25,6 +26,9 @@ export const PLATE_SETS: PlateSet[] = [
 ];
 
 const Count = z.number().int().min(1).max(1000);
+// Common practice, no source: the divisions clock wheels and pinions are cut with, and the largest hole circles made.
+const BENCH_DIVISIONS: BenchRange = { min: 4, max: 400 };
+const BENCH_CIRCLE: BenchRange = { min: 10, max: 200 };
 
 export const DividingInput = z.object({
   teeth: Count,
@@ -119,6 +123,12 @@ export const dividing: Calculator<typeof DividingInput, DividingResults> = {
         `Dividing into ${teeth} is not possible with these circles: it needs a circle whose hole count is a multiple of ${turnsExact.denominator}. Use another plate, or differential indexing.`,
       );
     }
+    const oddCircle = circles.find((c) => c < BENCH_CIRCLE.min || c > BENCH_CIRCLE.max);
+    pushWarnings(
+      warnings,
+      outsideBench('A division', teeth, BENCH_DIVISIONS, 'parts'),
+      oddCircle === undefined ? null : outsideBench('A hole circle', oddCircle, BENCH_CIRCLE, 'holes'),
+    );
     if (ratio !== 40) {
       warnings.push(`Most dividing heads have a 40 : 1 worm; check that yours really is ${ratio} : 1.`);
     }
@@ -128,6 +138,7 @@ export const dividing: Calculator<typeof DividingInput, DividingResults> = {
     'Simple indexing: the crank turns ratio/teeth times per division, made up of whole turns and a number of holes on one circle.',
     'A circle works when its hole count times the ratio, divided by the number of divisions, is a whole number; the smallest usable circle is listed first.',
     'Sector arms are counted in spaces: the number of holes to move. Set across the arms, that takes in one more hole than the count, because the hole the pin starts in is not a move.',
+    'The ranges behind the "far outside bench practice" warnings are common practice, no source.',
     'The Brown & Sharpe hole counts are from memory; they reproduce the divisions that Brown & Sharpe claims for its plates. The Cincinnati attribution of the two-sided plate is from memory; its hole counts are from OD 16448.',
   ],
   sources: [

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { outsideBench, pushWarnings, type BenchRange } from './bench-range';
 import type { Calculator, CalcStep } from './types';
 
 const SCHNEIDER = 'Schneider Co. "Coefficient of friction reference chart" (schneider-company.com)';
@@ -58,8 +59,11 @@ export const PivotBurnishInput = z.object({
   /** Shoulder to the centre of the load, about half the engaged length. */
   leverArmMm: z.number().positive().min(0.001).max(100),
   pivotDiameterMm: z.number().positive().min(0.01).max(50),
-  /** Defaults to 1.5 × the pivot diameter when left out. */
+  /** Length of the pivot in the hole, for the bearing pressure. Defaults to 1.5 × the pivot diameter when left out. */
   bearingLengthMm: z.number().positive().min(0.01).max(100).optional(),
+  /** Length of the pivot from its shoulder to its end; checked against the usual 1.5–2 × its diameter. */
+  pivotLengthMm: z.number().positive().min(0.01).max(100).optional(),
+  /** A cautious working figure for hardened and tempered arbor steel (common practice, no source). */
   allowableStressMPa: z.number().positive().min(1).max(5000).default(200),
   frictionCoefficient: z.number().nonnegative().max(2).default(BRASS_ON_STEEL_LUBRICATED.mu),
   surfaceSpeedMPerMin: z.number().positive().min(0.1).max(2000).default(TOOL_STEEL.mPerMin),
@@ -72,6 +76,7 @@ export interface PivotBurnishResults {
   bearingPressureMPa: number;
   frictionTorqueNmm: number;
   spindleRpm: number;
+  /** Safety factor on bending: allowable stress ÷ working (bending) stress. */
   safetyFactor: number;
 }
 
@@ -80,6 +85,10 @@ const SMALL_LATHE_TOP_RPM = 3000;
 // Common practice, no source: pivot length about 1.5–2 × its diameter.
 const PIVOT_LENGTH_RATIO = { min: 1.5, max: 2 };
 const EPS = 1e-9;
+// Common practice, no source: what clock pivots carry and are made in. Outside these an input is likely a slip.
+const BENCH_LOAD_N: BenchRange = { min: 0.005, max: 200 };
+const BENCH_PIVOT_MM: BenchRange = { min: 0.05, max: 5 };
+const BENCH_ALLOWABLE_MPA: BenchRange = { min: 50, max: 1500 };
 
 const show = (n: number, unit: string) => `${String(Number(n.toPrecision(4)))} ${unit}`.trim();
 
@@ -110,17 +119,31 @@ export const pivotBurnish: Calculator<typeof PivotBurnishInput, PivotBurnishResu
         `Bending stress ${show(bendingStressMPa, 'MPa')} is over the allowable ${show(allow, 'MPa')}: the pivot may bend or snap. Make it at least ${show(minDiameterMm, 'mm')}.`,
       );
     }
-    const ratio = length / d;
-    if (ratio < PIVOT_LENGTH_RATIO.min - EPS || ratio > PIVOT_LENGTH_RATIO.max + EPS) {
+    const pivotLength = input.pivotLengthMm;
+    if (pivotLength !== undefined) {
+      const ratio = pivotLength / d;
+      if (ratio < PIVOT_LENGTH_RATIO.min - EPS || ratio > PIVOT_LENGTH_RATIO.max + EPS) {
+        warnings.push(
+          `The pivot is ${show(ratio, '×')} its diameter long; about 1.5–2 × is usual (common practice, no source).`,
+        );
+      }
+      if (input.bearingLengthMm !== undefined && input.bearingLengthMm > pivotLength + EPS) {
+        warnings.push('The bearing length is longer than the pivot: a pivot bears only on its own length.');
+      }
+    }
+    if (a > (pivotLength ?? length)) {
       warnings.push(
-        `The pivot is ${show(ratio, '×')} its diameter long; about 1.5–2 × is usual (common practice, no source).`,
+        pivotLength === undefined
+          ? 'The lever arm is longer than the bearing length: the load centre lies beyond the end of the pivot.'
+          : 'The lever arm is longer than the pivot: the load centre lies beyond its end.',
       );
     }
-    if (a > length) {
-      warnings.push(
-        'The lever arm is longer than the bearing length: the load centre lies beyond the end of the pivot.',
-      );
-    }
+    pushWarnings(
+      warnings,
+      outsideBench('A pivot load', F, BENCH_LOAD_N, 'N'),
+      outsideBench('A pivot', d, BENCH_PIVOT_MM, 'mm'),
+      outsideBench('An allowable stress', allow, BENCH_ALLOWABLE_MPA, 'MPa'),
+    );
     if (spindleRpm > SMALL_LATHE_TOP_RPM) {
       warnings.push(
         `${show(spindleRpm, 'rpm')} is more than a small lathe gives (about ${SMALL_LATHE_TOP_RPM} rpm): the lathe's top speed will be the limit.`,
@@ -135,7 +158,19 @@ export const pivotBurnish: Calculator<typeof PivotBurnishInput, PivotBurnishResu
         formula: 'd_min = (32·F·a / (π·σ_allow))^(1/3)',
         result: show(minDiameterMm, 'mm'),
       },
-      { label: 'Safety factor', formula: 'σ_allow / σ', result: show(safetyFactor, '') },
+      {
+        label:
+          raw.allowableStressMPa === undefined
+            ? 'Allowable stress (200 MPa: common practice, no source)'
+            : 'Allowable stress (as given)',
+        formula: 'σ_allow',
+        result: show(allow, 'MPa'),
+      },
+      {
+        label: 'Safety factor on bending: allowable stress ÷ working stress',
+        formula: 'σ_allow / σ',
+        result: show(safetyFactor, ''),
+      },
       {
         label: input.bearingLengthMm === undefined ? 'Bearing length (taken as 1.5 × d)' : 'Bearing length',
         formula: 'ℓ',

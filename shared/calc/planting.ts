@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { inBench, outsideBench, pushWarnings, type BenchRange } from './bench-range';
 import type { Calculator, CalcStep } from './types';
 
 interface Point {
@@ -56,6 +57,9 @@ type CircleIntersection =
 const num = (n: number) => String(Number(n.toPrecision(6)));
 // Below this share of the smaller distance, the crossing is so flat that small errors move the point a long way.
 const FLAT_CROSSING = 0.01;
+// Common practice, no source: clock plates and the centre distances planted on them.
+const BENCH_CENTRE_DISTANCE_MM: BenchRange = { min: 2, max: 400 };
+const BENCH_FROM_DATUM_MM: BenchRange = { min: -500, max: 500 };
 
 /**
  * Where the circle of radius r0 about p0 meets the circle of radius r1 about p1. `left` and `right` are the
@@ -209,6 +213,24 @@ export const planting: Calculator<typeof PlantingInput, PlantingResults> = {
         ...(arbor.pitchRadiusMm === undefined ? {} : { pitchRadiusMm: arbor.pitchRadiusMm }),
       });
     }
+    const shortOrLong = results.depths.find((x) => !inBench(x.distanceMm, BENCH_CENTRE_DISTANCE_MM));
+    const farOff = results.arbors.find(
+      (x) => !inBench(x.fromDatum.x, BENCH_FROM_DATUM_MM) || !inBench(x.fromDatum.y, BENCH_FROM_DATUM_MM),
+    );
+    pushWarnings(
+      warnings,
+      shortOrLong === undefined
+        ? null
+        : outsideBench(
+            `The centre distance ${shortOrLong.from} → ${shortOrLong.to}`,
+            shortOrLong.distanceMm,
+            BENCH_CENTRE_DISTANCE_MM,
+            'mm',
+          ),
+      farOff === undefined
+        ? null
+        : `${farOff.name} lies ${num(Math.hypot(farOff.fromDatum.x, farOff.fromDatum.y))} mm from the datum, far outside any clock plate (about 500 mm; common practice, no source): check the coordinates.`,
+    );
     return { results, warnings, steps };
   },
   assumptions: [
@@ -217,6 +239,7 @@ export const planting: Calculator<typeof PlantingInput, PlantingResults> = {
     'An arbor placed from one other lies at the given distance and angle, the angle counter-clockwise from the x datum line.',
     'Centre distances are entered as wanted, including any depthing allowance; the calculator does not add one.',
     'An arbor that cannot be placed, and every arbor measured from it, is left out rather than put somewhere wrong.',
+    'The ranges behind the "far outside bench practice" warnings are common practice, no source.',
   ],
   sources: ['ANU "Intersection between two circles (3)" (vrarchitect.net/anu/cg/Maths/circleIntersect3.en.html)'],
   cautions: [

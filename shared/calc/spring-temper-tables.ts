@@ -5,6 +5,11 @@ export const EASTERN = 'Eastern Tool Steel O-1 data sheet (easterntoolsteel.com/
 export const NOONS = 'noonsknives.blogspot.com "AISI 1095" (maker\'s blog, weak)';
 export const PRECISION = 'Precision Steel Warehouse, "Temper designations of wrought copper-base alloys"';
 export const OLIN = 'olinbrass.com "C26000 (ASTM B36) Cartridge Brass"';
+export const MEAD =
+  'Mead Metals "Annealed Spring Steel Physical & Chemical Properties" (meadmetals.com), ASTM A684 suggested heat treatments';
+export const MAKEITFROM_C38500 = 'makeitfrom.com "UNS C38500 (CW608N) Architectural Bronze" (M20, as hot rolled)';
+export const ASM_1090 =
+  'steel-heattreatment.com Table 2 (data from the ASM Metals Handbook): 1090 quenched and tempered, 388 HB';
 
 export interface TemperBand {
   name: string;
@@ -79,6 +84,33 @@ export const HARDENING = {
 } as const;
 export type Hardening = (typeof HARDENING)[keyof typeof HARDENING];
 
+export interface SpringTemperRange {
+  temperatureC: { min: number; max: number };
+  temperatureF: { min: number; max: number };
+  hrc: { min: number; max: number };
+  source: string;
+}
+/**
+ * Where each steel's own table puts a flat spring's hardness. Flat springs are usually wanted at about 44–50 HRC
+ * (common practice, no source), which O1 reaches only well above any temper colour; no table was found for silver
+ * steel.
+ */
+export const SPRING_TEMPER: Record<keyof typeof HARDENING, SpringTemperRange | null> = {
+  O1: {
+    temperatureC: { min: 425, max: 480 },
+    temperatureF: { min: 800, max: 900 },
+    hrc: { min: 44, max: 49 },
+    source: EASTERN,
+  },
+  '1095': {
+    temperatureC: { min: 371, max: 427 },
+    temperatureF: { min: 700, max: 800 },
+    hrc: { min: 45, max: 49 },
+    source: MEAD,
+  },
+  silver: null,
+};
+
 const temper = (
   name: string,
   numbersHard: number,
@@ -120,28 +152,39 @@ export interface ClickSpringMaterial {
   id: string;
   label: string;
   youngsModulusGPa: number;
-  yieldStrengthMPa: number | null;
+  /** Elastic limit (yield or proof strength); every preset has one, so the stress is always judged. */
+  yieldStrengthMPa: number;
   source: string;
 }
 const material = (
   id: string,
   label: string,
   youngsModulusGPa: number,
-  yieldStrengthMPa: number | null,
+  yieldStrengthMPa: number,
   source: string,
 ): ClickSpringMaterial => ({ id, label, youngsModulusGPa, yieldStrengthMPa, source });
 const slug = (name: string) =>
   name.replace('¼', 'quarter').replace('½', 'half').replace('¾', 'three-quarter').replace(/ /g, '-');
+/**
+ * The spring-steel limit is the yield of quenched-and-tempered 1090 at 388 HB (about 41 HRC); a spring tempered harder
+ * carries more, so the figure errs on the safe side.
+ */
 export const CLICK_SPRING_MATERIALS: readonly ClickSpringMaterial[] = [
-  material('spring-steel', 'Spring steel', 206, null, 'Tokai Bane "Flat springs formulas", Table 2'),
+  material(
+    'spring-steel',
+    'Carbon spring steel, hardened and tempered',
+    206,
+    895,
+    `modulus: Tokai Bane "Flat springs formulas", Table 2; elastic limit: ${ASM_1090}`,
+  ),
   ...BRASS_TEMPERS.map((t) =>
     material(
       `c26000-${slug(t.name)}`,
       `C26000 cartridge brass, ${t.name}`,
       110,
       t.strength.yieldMPa,
-      `modulus: makeitfrom.com; yield: ${OLIN}`,
+      `modulus: makeitfrom.com; elastic limit (yield): ${OLIN}`,
     ),
   ),
-  material('leaded-brass', 'Leaded brass C38500', 100, null, 'makeitfrom.com (M20 temper)'),
+  material('leaded-brass', 'Leaded brass C38500', 100, 130, `modulus and elastic limit (yield): ${MAKEITFROM_C38500}`),
 ];

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { clickSpring, ClickSpringInput, type ClickSpringResults } from './click-spring';
 import type { Calculator, CalcOutput, CalcStep } from './types';
 import {
   BRASS_TEMPERS,
@@ -8,8 +9,13 @@ import {
   NOONS,
   OLIN,
   PRECISION,
+  MAKEITFROM_C38500,
+  MEAD,
   SHEFFIELD,
+  SPRING_TEMPER,
   TEMPER_COLOURS,
+  ASM_1090,
+  type SpringTemperRange,
   type Hardening,
   type HardnessPoint,
   type Strength,
@@ -32,15 +38,6 @@ const BrassInput = z.object({
   mode: z.literal('brass'),
   numbersHard: z.number().int().min(0).max(20),
 });
-const ClickSpringInput = z.object({
-  mode: z.literal('click-spring'),
-  widthMm: z.number().positive().min(0.01).max(100),
-  thicknessMm: z.number().positive().min(0.01).max(10),
-  lengthMm: z.number().positive().min(0.1).max(1000),
-  deflectionMm: z.number().positive().max(1000),
-  youngsModulusGPa: z.number().positive().min(1).max(500).default(206),
-  yieldStrengthMPa: z.number().positive().min(1).max(5000).optional(),
-});
 export const SpringTemperInput = z.discriminatedUnion('mode', [SteelInput, BrassInput, ClickSpringInput]);
 export type SpringTemperInput = z.input<typeof SpringTemperInput>;
 
@@ -54,6 +51,8 @@ interface SteelResults {
   hardnessCurve: HardnessPoint[];
   hardnessCurveSource: string | null;
   hardnessAtTemperatureHrc: number | null;
+  /** Where this steel's own table puts a flat spring (about 44–50 HRC); null where no table was found. */
+  springTemper: SpringTemperRange | null;
 }
 interface BrassResults {
   mode: 'brass';
@@ -61,13 +60,6 @@ interface BrassResults {
   temperName: string;
   publishedReductionPercent: number | null;
   strength: Strength;
-}
-interface ClickSpringResults {
-  mode: 'click-spring';
-  forceN: number;
-  stressMPa: number;
-  stiffnessNPerMm: number;
-  stressToYield: number | null;
 }
 export type SpringTemperResults = SteelResults | BrassResults | ClickSpringResults;
 type Output = CalcOutput<SpringTemperResults>;
@@ -150,6 +142,20 @@ function steel(input: z.output<typeof SteelInput>): Output {
       });
     }
   }
+  const spring = SPRING_TEMPER[input.steel];
+  const judgedByColour = colourForTemperature !== null || temperatureForColour !== null;
+  if (input.steel === 'O1' && judgedByColour && spring !== null) {
+    warnings.push(
+      `Temper colours are for plain carbon steel judged by eye. O1 at the light-blue heat (310 °C) is still about 56 HRC by its data sheet, far harder than a flat spring wants; for a spring temper the same sheet gives ${spring.hrc.max}–${spring.hrc.min} HRC at ${spring.temperatureC.min}–${spring.temperatureC.max} °C (${spring.temperatureF.min}–${spring.temperatureF.max} °F). Temper O1 springs by thermometer, not by colour.`,
+    );
+  }
+  if (spring !== null) {
+    steps.push({
+      label: 'Tempering heat for a flat spring (about 44–50 HRC), from the steel’s own table',
+      formula: spring.source,
+      result: `${spring.temperatureC.min}–${spring.temperatureC.max} °C, ${spring.hrc.max}–${spring.hrc.min} HRC`,
+    });
+  }
   if (input.colour !== undefined) {
     if (temperatureForColour === null) {
       warnings.push(`"${input.colour}" is not a colour on the Sheffield Gauge Plate chart; pick one of its names.`);
@@ -173,6 +179,7 @@ function steel(input: z.output<typeof SteelInput>): Output {
       hardnessCurve: curve === null ? [] : [...curve.points],
       hardnessCurveSource: curve === null ? null : curve.source,
       hardnessAtTemperatureHrc,
+      springTemper: spring,
     },
     warnings,
     steps,
@@ -202,37 +209,6 @@ function brass(input: z.output<typeof BrassInput>): Output {
   };
 }
 
-function clickSpring(input: z.output<typeof ClickSpringInput>): Output {
-  const { widthMm: b, thicknessMm: t, lengthMm: L, deflectionMm: delta } = input;
-  const E = input.youngsModulusGPa * 1000;
-  const I = (b * t ** 3) / 12;
-  const stiffnessNPerMm = (3 * E * I) / L ** 3;
-  const forceN = stiffnessNPerMm * delta;
-  const stressMPa = (1.5 * E * t * delta) / L ** 2;
-  const y = input.yieldStrengthMPa;
-  const stressToYield = y === undefined ? null : stressMPa / y;
-  const warnings: string[] = [];
-  if (y !== undefined && stressMPa > y) {
-    warnings.push(
-      `Root stress ${show(stressMPa, 'MPa')} is over the yield strength ${show(y, 'MPa')}: the spring will take a set.`,
-    );
-  }
-  if (delta / L > 0.1) {
-    warnings.push(
-      'The deflection is more than a tenth of the length: the small-deflection formula stops holding, so treat the figures as rough.',
-    );
-  }
-  const steps: CalcStep[] = [
-    { label: 'Second moment of area', formula: 'I = b·t³/12', result: show(I, 'mm⁴') },
-    { label: 'Stiffness', formula: 'k = 3EI/L³', result: show(stiffnessNPerMm, 'N/mm') },
-    { label: 'Force at the tip', formula: 'F = 3EIδ/L³', result: show(forceN, 'N') },
-    { label: 'Root stress', formula: 'σ = 1.5·E·t·δ/L²', result: show(stressMPa, 'MPa') },
-  ];
-  if (stressToYield !== null)
-    steps.push({ label: 'Share of yield used', formula: 'σ / σ_y', result: show(stressToYield, '') });
-  return { results: { mode: 'click-spring', forceN, stressMPa, stiffnessNPerMm, stressToYield }, warnings, steps };
-}
-
 export const springTemper: Calculator<typeof SpringTemperInput, SpringTemperResults> = {
   name: 'spring-temper',
   title: 'Spring temper',
@@ -250,6 +226,8 @@ export const springTemper: Calculator<typeof SpringTemperInput, SpringTemperResu
     'Hardness between two table points is read off a straight line; outside the table none is given.',
     'Brass reduction follows the B&S gauge: each gauge number of cold reduction adds a quarter-hard. Strengths are for C26000 cartridge brass strip; leaded clock brass hammer-hardens less well.',
     'The click spring is a narrow rectangular cantilever with a small deflection; for a wide plate use E/(1−ν²).',
+    'Every click-spring material carries an elastic limit. Past 60 % of it the calculator warns: a click spring flexes at every click, and guidance for repeated bending keeps the peak stress to about half the tensile strength. Past the limit itself no force is given, because the spring sets or breaks first.',
+    'Flat springs are usually wanted at about 44–50 HRC (common practice, no source); the spring tempering heat comes from each steel’s own table, not from the colours.',
   ],
   sources: [
     SHEFFIELD,
@@ -258,7 +236,12 @@ export const springTemper: Calculator<typeof SpringTemperInput, SpringTemperResu
     'glue-it.com "Heat treating silver steel"',
     `${PRECISION} (precisionsteel.com/technical-data/tempers/copper-base-alloys)`,
     OLIN,
-    'makeitfrom.com (C26000 and C38500 moduli)',
+    MEAD,
+    'makeitfrom.com (C26000 modulus)',
+    MAKEITFROM_C38500,
+    ASM_1090,
+    "amesweb.info, citing Shigley's Mechanical Engineering Design, p. 532 (allowable bending stress for repeated loads)",
+    'Tokai Bane "Torsion springs stress" (JIS B 2704)',
     'brass-copper-castings.com (C38500 cold-working capacity "poor")',
     'Tokai Bane "Flat springs formulas"',
   ],

@@ -12,6 +12,9 @@ const USUAL_LENGTH_MM = { min: 50, max: 1600 };
 // From memory: gravity at the Earth's surface lies within about 9.78–9.83 m/s².
 const USUAL_GRAVITY = { min: 9.77, max: 9.84 };
 const PERIOD_MISMATCH = 0.01;
+// A train more than this share off the beat wanted keeps bad time with the right pendulum: 0.1 % is 86 s a day.
+const BEAT_MISMATCH = 0.001;
+const SECONDS_PER_DAY = 86_400;
 
 const Teeth = z.number().int().min(1).max(1000);
 const Length = z.number().positive().max(20000);
@@ -271,6 +274,14 @@ export const trainPendulum: Calculator<typeof TrainPendulumInput, TrainPendulumR
 
     if (input.targetBeatsPerHour !== undefined) {
       const target = input.targetBeatsPerHour;
+      const off = (beatsPerHour - target) / target;
+      if (Math.abs(off) > BEAT_MISMATCH) {
+        // A pendulum beating `target` drives the centre wheel round in beatsPerHour/target hours.
+        const perDay = SECONDS_PER_DAY * (target / beatsPerHour - 1);
+        warnings.push(
+          `This train gives ${num(beatsPerHour)} beats an hour, ${num(Math.abs(off) * 100)} % ${off > 0 ? 'over' : 'under'} the ${target} wanted: with a pendulum beating ${target} the hands would ${perDay < 0 ? 'lose' : 'gain'} ${num(Math.abs(perDay))} s a day. Change the counts.`,
+        );
+      }
       const suggestions = searchTrains(target, wheelTeeth.length, 10);
       results.suggestions = suggestions;
       steps.push({

@@ -37,11 +37,31 @@ export const CourseFrontMatter = z.object({
 });
 export type CourseFrontMatter = z.infer<typeof CourseFrontMatter>;
 
+/**
+ * A worked example a lesson prints for a calculator it embeds. content:check runs the calculator on `inputs` and
+ * fails the lesson unless every figure in `shows` is what the calculator gives, rounded as the lesson writes it, and
+ * appears in the lesson's text.
+ */
+export const CalculatorExample = z.object({
+  calculator: Key,
+  /** Inputs as the calculator takes them: mm, °C, g, N. */
+  inputs: z.record(z.string(), z.unknown()),
+  /**
+   * Figures keyed by result path ("insertionDepthMm", "radiiMm.0", "solutions.0.fraction"). Quote numbers as the
+   * lesson writes them ("0.040"): the decimals given are the precision checked.
+   */
+  shows: z
+    .record(z.string(), z.union([z.string(), z.number(), z.boolean()]))
+    .refine((o) => Object.keys(o).length > 0, 'name at least one figure the lesson shows'),
+});
+export type CalculatorExample = z.infer<typeof CalculatorExample>;
+
 export const LessonFrontMatter = z.object({
   title: z.string().min(1),
   minutes: z.number().int().min(1).max(600),
   skills: z.array(Key).default([]),
   project: ProjectSpec.optional(),
+  calculatorExamples: z.array(CalculatorExample).default([]),
 });
 export type LessonFrontMatter = z.infer<typeof LessonFrontMatter>;
 

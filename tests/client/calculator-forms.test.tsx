@@ -12,14 +12,15 @@ describe('pivot & burnish form', () => {
   it('when the friction comes from the table or is typed, then the torque and speed follow the chosen figure', async () => {
     fakeServer();
     renderCalculator(pivotBurnishForm);
-    // TRADE.md §2: F = 10 N, a = 0.75 mm, σ_allow = 200 MPa -> d_min = 0.726 mm (computed)
-    expect(resultOf('Smallest safe diameter')).toBe('0.7256 mm');
-    // μ 0.19 brass on steel, lubricated (Schneider Co. chart): T = 0.19 × 10 N × 0.5 mm = 0.95 N·mm (computed)
-    expect(resultOf('Friction torque')).toBe('0.95 N·mm');
+    // The lesson's third arbor: F = 1.42 N, a = 0.75 mm, σ_allow = 200 MPa ->
+    // d_min = (32 × 1.42 × 0.75 / (π × 200))^(1/3) = 0.3785 mm (computed)
+    expect(resultOf('Smallest safe diameter')).toBe('0.3785 mm');
+    // μ 0.19 brass on steel, lubricated (Schneider Co. chart): T = 0.19 × 1.42 N × 0.5 mm = 0.1349 N·mm (computed)
+    expect(resultOf('Friction torque')).toBe('0.1349 N·mm');
     await userEvent.selectOptions(screen.getByRole('combobox', { name: 'Friction coefficient' }), 'typed');
     await userEvent.clear(screen.getByRole('textbox', { name: /Friction coefficient μ/ }));
     await userEvent.type(screen.getByRole('textbox', { name: /Friction coefficient μ/ }), '0.11');
-    expect(resultOf('Friction torque')).toBe('0.55 N·mm'); // 0.11 × 10 × 0.5 (computed)
+    expect(resultOf('Friction torque')).toBe('0.0781 N·mm'); // 0.11 × 1.42 × 0.5 (computed)
     await userEvent.selectOptions(screen.getByRole('combobox', { name: 'Surface speed for turning' }), 'typed');
     await userEvent.clear(screen.getByRole('textbox', { name: /Surface speed/ }));
     await userEvent.type(screen.getByRole('textbox', { name: /Surface speed/ }), '30');
@@ -62,5 +63,23 @@ describe('spring temper form', () => {
     // Same spring, C26000 E = 110 GPa -> F = 0.186 N (computed); σ 123.8 MPa (computed)
     expect(resultOf('Force at the tip')).toBe('0.1856 N');
     expect(resultOf('Root stress')).toBe('123.8 MPa');
+  });
+
+  it('when a steel click spring is bent past its elastic limit, then no force is shown and the warning gives the ratio', () => {
+    fakeServer();
+    renderCalculator(springTemperForm, {
+      search: '?mode=click-spring&widthMm=2&thicknessMm=1&lengthMm=5&deflectionMm=0.5',
+    });
+    // σ = 1.5 × 206 000 × 1 × 0.5 / 25 = 6180 MPa against 895 MPa (computed; limit from the ASM Metals Handbook figure)
+    expect(resultOf('Force at the tip')).toBe('not reached');
+    expect(resultOf('Root stress, by the elastic formula')).toBe('6180 MPa');
+    expect(screen.getByText(/6180 MPa is 6\.905 × the elastic limit of 895 MPa/)).toBeInTheDocument();
+  });
+
+  it('when O1 is chosen, then the flat-spring temper from its data sheet is shown in whole HRC', () => {
+    fakeServer();
+    renderCalculator(springTemperForm);
+    // Eastern Tool Steel O-1 data sheet: 800 °F/425 °C 49 HRC, 900 °F/480 °C 44 HRC
+    expect(resultOf('Temper for a flat spring (about 44–50 HRC)')).toBe('425 °C to 480 °C, 49–44 HRC');
   });
 });

@@ -14,20 +14,29 @@ describe('calculator shell (broach taper)', () => {
   it('when a target diameter is typed, then the insertion depth follows at once and the address keeps the inputs', async () => {
     fakeServer();
     renderCalculator(broachTaperForm);
-    // TRADE.md §1: k = 1/50, broach 0.50 mm, target 1.05 mm -> 27.5 mm (computed)
-    expect(resultOf('Insertion depth')).toBe('27.5 mm');
+    // The lesson's five-sided broach: k = 0.02 read corner to flat, 0.50 mm at the mark, 1.05 mm at mid-plate of a
+    // 2 mm plate -> 23.49 mm (computed; worked out in tests/shared/calc/broach-taper.test.ts)
+    expect(resultOf('Insertion depth')).toBe('23.49 mm');
+    await userEvent.selectOptions(
+      screen.getByRole('combobox', { name: /Section of the cutting broach/ }),
+      'Round, or readings already cutting diameters',
+    );
+    // Round: (1.05 − 0.5) / 0.02 + 2/2 = 28.5 mm (computed)
+    expect(resultOf('Insertion depth')).toBe('28.5 mm');
     await userEvent.clear(field(/Target hole diameter/));
     await userEvent.type(field(/Target hole diameter/), '1.2');
-    // (1.2 − 0.5) / 0.02 = 35 mm (computed)
-    expect(resultOf('Insertion depth')).toBe('35 mm');
+    // (1.2 − 0.5) / 0.02 + 2/2 = 36 mm (computed)
+    expect(resultOf('Insertion depth')).toBe('36 mm');
     expect(screen.getByTestId('address').textContent).toContain('targetDiameterMm=1.2');
   });
 
   it('when the page opens from a shared address, then it shows that address’s inputs and results', () => {
     fakeServer();
-    renderCalculator(broachTaperForm, { search: '?taperPerMm=0.0077&targetDiameterMm=1.05&refDiameterMm=0.5' });
-    // TRADE.md §1: k = 0.0077, tip 0.50 mm, target 1.05 mm -> 71.4 mm (computed)
-    expect(resultOf('Insertion depth')).toBe('71.43 mm');
+    renderCalculator(broachTaperForm, {
+      search: '?broachSides=0&taperPerMm=0.0077&targetDiameterMm=1.05&refDiameterMm=0.5',
+    });
+    // TRADE.md §1: k = 0.0077, tip 0.50 mm, target 1.05 mm -> 71.43 mm to the face, + 1 mm to mid-plate (computed)
+    expect(resultOf('Insertion depth')).toBe('72.43 mm');
     expect(field(/Taper of the broach/)).toHaveValue('0.0077');
   });
 
@@ -51,9 +60,9 @@ describe('calculator shell (broach taper)', () => {
     const server = fakeServer();
     renderCalculator(broachTaperForm);
     await userEvent.click(screen.getByRole('radio', { name: /Imperial/ }));
-    // 1.05 mm / 25.4 = 0.041338583 in, shown to 5 figures as 0.041339; 27.5 mm / 25.4 = 1.083 in (computed)
+    // 1.05 mm / 25.4 = 0.041338583 in, shown to 5 figures as 0.041339; 23.487 mm / 25.4 = 0.9247 in (computed)
     expect(field(/Target hole diameter/)).toHaveValue('0.041339');
-    expect(resultOf('Insertion depth')).toBe('1.083 in');
+    expect(resultOf('Insertion depth')).toBe('0.9247 in');
     await waitFor(() =>
       expect(server).toHaveBeenCalledWith(
         '/api/account',
@@ -62,12 +71,12 @@ describe('calculator shell (broach taper)', () => {
     );
     await userEvent.clear(field(/Target hole diameter/));
     await userEvent.type(field(/Target hole diameter/), '0.05');
-    // 0.05 in = 1.27 mm; (1.27 − 0.5) / 0.02 = 38.5 mm = 1.516 in (computed)
-    expect(resultOf('Insertion depth')).toBe('1.516 in');
+    // 0.05 in = 1.27 mm at mid-plate; five-sided broach: 33.436 mm = 1.316 in (computed)
+    expect(resultOf('Insertion depth')).toBe('1.316 in');
     expect(screen.getByTestId('address').textContent).toContain('targetDiameterMm=1.27');
     await userEvent.click(screen.getByRole('radio', { name: /Metric/ }));
     expect(field(/Target hole diameter/)).toHaveValue('1.27');
-    expect(resultOf('Insertion depth')).toBe('38.5 mm');
+    expect(resultOf('Insertion depth')).toBe('33.44 mm');
   });
 
   it('when the taper is given as a ratio or as two readings, then it gives the same depth as typing it', async () => {
@@ -75,11 +84,11 @@ describe('calculator shell (broach taper)', () => {
     renderCalculator(broachTaperForm);
     await userEvent.click(screen.getByRole('radio', { name: 'Ratio' }));
     expect(field(/Taper as a ratio/)).toHaveValue('1:50');
-    expect(resultOf('Insertion depth')).toBe('27.5 mm'); // TRADE.md §1 (computed)
+    expect(resultOf('Insertion depth')).toBe('23.49 mm'); // the same k = 0.02 as typed (computed)
     await userEvent.clear(field(/Taper as a ratio/));
     await userEvent.type(field(/Taper as a ratio/), '1:130');
-    // (1.05 − 0.50) × 130 = 71.5 mm (computed)
-    expect(resultOf('Insertion depth')).toBe('71.5 mm');
+    // Five-sided, k = 1/130: (1.0585/1.10557 − 0.50) × 130 = 59.47 mm (computed)
+    expect(resultOf('Insertion depth')).toBe('59.47 mm');
     await userEvent.clear(field(/Taper as a ratio/));
     await userEvent.type(field(/Taper as a ratio/), 'fifty');
     expect(screen.getByText('Write the taper as 1:50, 1/50 or a plain number.')).toBeInTheDocument();
@@ -87,7 +96,7 @@ describe('calculator shell (broach taper)', () => {
     await userEvent.type(field(/Diameter, first station/), '0.5');
     await userEvent.type(field(/Diameter, second station/), '1');
     // 0.50 and 1.00 mm over 25 mm: k = 0.02, about 1:50 (computed)
-    expect(resultOf('Insertion depth')).toBe('27.5 mm');
+    expect(resultOf('Insertion depth')).toBe('23.49 mm');
     expect(screen.getByText('1:50')).toBeInTheDocument();
   });
 
@@ -105,14 +114,22 @@ describe('calculator shell (broach taper)', () => {
     expect(JSON.parse(String(post?.[1]?.body))).toEqual({
       calculator: 'broach-taper',
       title: 'Centre wheel, front plate',
-      inputs: { taperPerMm: 0.02, refDiameterMm: 0.5, targetDiameterMm: 1.05, plateThicknessMm: 2, pivotDiameterMm: 1 },
+      inputs: {
+        taperPerMm: 0.02,
+        refDiameterMm: 0.5,
+        targetDiameterMm: 1.05,
+        plateThicknessMm: 2,
+        pivotDiameterMm: 1,
+        broachSides: 5,
+        openedFrom: 'both',
+      },
     });
   });
 
   it('when a mentor uses a calculator, then it works but offers no saving', () => {
     fakeServer();
     renderCalculator(broachTaperForm, { user: { ...ned, id: 3, role: 'mentor' } });
-    expect(resultOf('Insertion depth')).toBe('27.5 mm');
+    expect(resultOf('Insertion depth')).toBe('23.49 mm');
     expect(screen.queryByRole('button', { name: 'Save result' })).not.toBeInTheDocument();
     expect(
       within(screen.getByRole('complementary', { name: 'Caution at the bench' })).getByText(/glass-hard/),

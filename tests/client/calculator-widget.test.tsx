@@ -32,11 +32,13 @@ describe('calculator widget', () => {
     fakeServer();
     renderInLesson('broach-taper');
     expect(screen.getByText('Broach taper calculator')).toBeInTheDocument();
-    expect(resultOf('Insertion depth')).toBe('27.5 mm'); // TRADE.md §1 (computed)
+    // The lesson's five-sided broach example (computed in tests/shared/calc/broach-taper.test.ts)
+    expect(resultOf('Insertion depth')).toBe('23.49 mm');
     const target = screen.getByRole('textbox', { name: /Target hole diameter/ });
     await userEvent.clear(target);
     await userEvent.type(target, '1.1');
-    expect(resultOf('Insertion depth')).toBe('30 mm'); // (1.1 − 0.5) / 0.02 (computed)
+    // 1.1 mm at mid-plate: entry 1.1221 mm, read 1.01495 mm at the mark, (1.01495 − 0.5) / 0.02 = 25.75 mm (computed)
+    expect(resultOf('Insertion depth')).toBe('25.75 mm');
     expect(screen.getByTestId('address').textContent).toBe('?step=2');
     expect(screen.getByRole('link', { name: /Open on its own page/ })).toHaveAttribute(
       'href',

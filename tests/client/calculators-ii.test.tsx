@@ -118,8 +118,9 @@ describe('planting form', () => {
 
 describe('fusee form', () => {
   it('when five adjusting-rod readings are entered, then the radii table gives one radius per turn', async () => {
-    // TRADE.md §6: R_b = 15 mm, Q = 300 N·mm, T = 900/750/600/450 N·mm → r = 5.0/6.0/7.5/10.0 mm (computed); the
-    // same weight at 45, 60, 75, 90 and 112.5 mm gives torques in that proportion, and 112.5 mm gives 4 mm (computed)
+    // TRADE.md §6: T = 900/750/600/450 N·mm → r = 5.0/6.0/7.5/10.0 mm from the largest radius alone (computed); the
+    // same weight at 45, 60, 75, 90 and 112.5 mm gives torques in that proportion, and 112.5 mm gives 4 mm (computed).
+    // Radii show to 0.01 mm, what a fusee is cut to.
     renderForm('fusee');
     fireEvent.click(screen.getByRole('button', { name: 'Clear the example' }));
     expect(screen.queryByText('Example readings')).not.toBeInTheDocument();
@@ -131,7 +132,7 @@ describe('fusee form', () => {
     fireEvent.change(screen.getByLabelText(/^Largest fusee radius/), { target: { value: '10' } });
     const rows = await screen.findAllByTestId('radius-row');
     expect(rows).toHaveLength(5);
-    expect(rows.map((r) => r.querySelectorAll('td')[3].textContent)).toEqual(['10', '7.5', '6', '5', '4']);
+    expect(rows.map((r) => r.querySelectorAll('td')[3].textContent)).toEqual(['10.00', '7.50', '6.00', '5.00', '4.00']);
     expect(figure('Spread of the torque')).toMatch(/→ 0 %$/);
   });
 
@@ -153,8 +154,8 @@ describe('unit toggle on the row editors', () => {
     const weight = screen.getByLabelText('Turn 1 weight (oz)');
     expect(weight).toHaveValue('7.0548'); // 200 g / 28.349523125 = 7.0547924 oz, shown to 5 figures (computed)
     expect(screen.getByRole('columnheader', { name: 'Fusee radius (in)' })).toBeInTheDocument();
-    // The first radius is the barrel's 15 mm chain radius: 0.5906 in (computed)
-    expect(screen.getAllByTestId('radius-row')[0].querySelectorAll('td')[3]).toHaveTextContent('0.5906');
+    // The first radius is the largest, 10 mm: 0.3937 in, to 0.0001 in (computed)
+    expect(screen.getAllByTestId('radius-row')[0].querySelectorAll('td')[3]).toHaveTextContent('0.3937');
     fireEvent.change(screen.getByLabelText('Turn 1 balance distance (in)'), { target: { value: '2' } });
     fireEvent.click(screen.getByLabelText(/Metric/));
     expect(screen.getByLabelText('Turn 1 balance distance (mm)')).toHaveValue('50.8');
@@ -178,6 +179,9 @@ describe('wheel and pinion form', () => {
     expect(await screen.findByText(/A lantern pinion needs the trundle diameter|Enter a number/)).toBeInTheDocument();
     await userEvent.type(screen.getByLabelText(/^Trundle diameter/), '0.9');
     expect(figure('Trundle in the tooth space')).toBe('does not fit');
+    await retype(screen.getByLabelText(/^Trundle diameter/), '0.78');
+    // 0.785 − 0.78 = 0.005 mm of play, under a tenth of the tooth space (computed): not "fits"
+    expect(figure('Trundle in the tooth space')).toBe('too tight');
     await retype(screen.getByLabelText(/^Trundle diameter/), '0.7');
     expect(figure('Trundle in the tooth space')).toBe('fits');
   });
@@ -198,7 +202,7 @@ describe('train and pendulum form', () => {
     // HyperPhysics "Rod pendulum": uniform rod 1.5 m → L_eq = 1.000 m, T = 2.00641 s
     renderForm('train-pendulum');
     fireEvent.click(screen.getByLabelText('Uniform rod'));
-    expect(figure("Your pendulum's equivalent simple length")).toBe('1000\u00a0mm');
+    expect(figure("Your pendulum's equivalent simple length")).toBe('1000.0\u00a0mm'); // to 0.1 mm, what is measured
     expect(figure("Your pendulum's full period")).toBe('2.00641\u00a0s');
   });
 

@@ -11,7 +11,8 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-// TRADE.md §1 check values: taper k = 1/50, broach 0.50 mm at the reference, target 1.05 mm -> 27.5 mm (computed).
+// TRADE.md §1 check values: taper k = 1/50, round broach 0.50 mm at the reference, target 1.05 mm -> 27.5 mm to
+// the entry face; opened from both faces (the default) the target is at mid-plate, t/2 = 1 mm deeper: 28.5 mm (computed).
 const BROACH = {
   taperPerMm: 0.02,
   refDiameterMm: 0.5,
@@ -54,11 +55,11 @@ describe('saving a result', () => {
     });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ calculator: 'broach-taper', title: 'Third wheel, back plate', inputs: BROACH });
-    expect(res.body.results.insertionDepthMm).toBeCloseTo(27.5, 9); // TRADE.md §1 (computed)
+    expect(res.body.results.insertionDepthMm).toBeCloseTo(28.5, 9); // TRADE.md §1 (computed)
     expect(typeof res.body.createdAt).toBe('string');
     const row = await Calculation.findByPk(res.body.id);
     expect(row?.userId).toBe(user.id);
-    expect((row?.results as { insertionDepthMm: number }).insertionDepthMm).toBeCloseTo(27.5, 9);
+    expect((row?.results as { insertionDepthMm: number }).insertionDepthMm).toBeCloseTo(28.5, 9);
   });
 
   it('when the inputs carry a sneaked-in result, then it is dropped from the stored inputs and defaults are filled', async () => {
@@ -163,7 +164,7 @@ describe('reading saved results', () => {
     for (const who of [apprentice, mentor, admin]) {
       const res = await who.agent.get(url);
       expect(res.status).toBe(200);
-      expect(res.body.results.insertionDepthMm).toBeCloseTo(27.5, 9); // TRADE.md §1 (computed)
+      expect(res.body.results.insertionDepthMm).toBeCloseTo(28.5, 9); // TRADE.md §1 (computed)
     }
     for (const who of [stranger, otherMentor]) expect((await who.agent.get(url)).status).toBe(404);
     expect((await t.anon().get(url)).status).toBe(401);

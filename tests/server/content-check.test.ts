@@ -106,6 +106,67 @@ describe('content check', () => {
     ]);
   });
 
+  it('when a lesson’s calculator example shows a figure the calculator does not give, then the check names the lesson, the figure and what the calculator gives', () => {
+    const dir = contentCopy();
+    const file = path.join(dir, BROACHING);
+    // The lesson's own example gives 23.49 mm for Ruth's five-sided broach; the plain-reading mark 27.5 mm is wrong.
+    edit(file, (s) =>
+      s.replace('insertionDepthMm: "23.49"', 'insertionDepthMm: "27.5"').replace('23.49 mm', '27.5 mm'),
+    );
+    const { problems } = checkContent(dir, CALCULATOR_NAMES);
+    expect(problems).toEqual([
+      {
+        file,
+        line: lineOf(file, 'calculatorExamples:'),
+        message:
+          'calculator example 1 (broach-taper): the lesson shows insertionDepthMm = 27.5 but the calculator gives 23.487',
+      },
+    ]);
+  });
+
+  it('when an example’s figure agrees with the calculator but the lesson text never prints it, then the check says so', () => {
+    const dir = contentCopy();
+    const file = path.join(dir, BROACHING);
+    edit(file, (s) => s.replaceAll('2.05°', 'about two degrees'));
+    const messages = checkContent(dir, CALCULATOR_NAMES).problems.map((p) => p.message);
+    expect(messages).toEqual([
+      "calculator example 1 (broach-taper): tiltDeg = 2.05 is checked but the lesson's text never shows that figure",
+    ]);
+  });
+
+  it('when a lesson embeds a calculator with no worked example for it, then the problem points at the directive', () => {
+    const dir = contentCopy();
+    const file = path.join(dir, BROACHING);
+    edit(file, (s) => s.replace(/calculatorExamples:[\s\S]*?\n---\n/, '---\n'));
+    const { problems } = checkContent(dir, CALCULATOR_NAMES);
+    expect(problems).toEqual([
+      {
+        file,
+        line: lineOf(file, '::calculator{name="broach-taper"}'),
+        message:
+          'calculator "broach-taper" is embedded but calculatorExamples gives no worked example for it, so its figures cannot be checked',
+      },
+    ]);
+  });
+
+  it('when an example’s inputs are not valid for its calculator, then the problem names the input', () => {
+    const dir = contentCopy();
+    const file = path.join(dir, BROACHING);
+    edit(file, (s) => s.replace('      broachSides: 5\n', '      broachSides: 2\n'));
+    const messages = checkContent(dir, CALCULATOR_NAMES).problems.map((p) => p.message);
+    expect(messages).toEqual([
+      'calculator example 1 (broach-taper): the inputs are not valid: broachSides: Enter 0 for a round broach, or 3 to 12 sides.',
+    ]);
+  });
+
+  it('when an example names a result the calculator does not have, then the check says so', () => {
+    const dir = contentCopy();
+    const file = path.join(dir, BROACHING);
+    edit(file, (s) => s.replace('      tiltDeg: "2.05"', '      tiltDegrees: "2.05"'));
+    const messages = checkContent(dir, CALCULATOR_NAMES).problems.map((p) => p.message);
+    expect(messages).toEqual(['calculator example 1 (broach-taper): the calculator has no result "tiltDegrees"']);
+  });
+
   it('when an SVG in images/ carries a script, then the check refuses it', () => {
     const dir = contentCopy();
     const svg = path.join(dir, 'going-train-wall-regulator', 'images', 'bad.svg');
@@ -132,5 +193,14 @@ describe('content check', () => {
       `${file}:${lineOf(file, 'no-such-calculator')}: unknown calculator "no-such-calculator"`,
     );
     expect(res.stderr).toMatch(new RegExp(`${course.replace(/[.]/g, '\\.')}:1: front matter level`));
+  });
+
+  it('when the CLI runs on a copy whose example disagrees with its calculator, then it exits 1 naming the figure', async () => {
+    const dir = contentCopy();
+    const file = path.join(dir, 'going-train-wall-regulator', '10-train-count-and-pendulum.md');
+    edit(file, (s) => s.replace('pendulumLengthMm: "993.6"', 'pendulumLengthMm: "993.7"'));
+    const res = await cli(dir);
+    expect(res.code).toBe(1);
+    expect(res.stderr).toContain('the lesson shows pendulumLengthMm = 993.7 but the calculator gives 993.621');
   });
 });

@@ -2,6 +2,7 @@ import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import type { Root } from 'mdast';
 import { visit } from 'unist-util-visit';
+import { checkCalculatorExamples, type EmbeddedCalculator } from './calculator-examples';
 import { loadContent, type ContentProblem } from './content-loader';
 import { parseLessonMarkdown } from './lesson-markdown';
 
@@ -23,7 +24,8 @@ interface BodyContext {
 
 /**
  * Everything the lesson page relies on, checked before the server ever syncs it: front matter (by the loader),
- * calculator names, images, and the Markdown dialect (no raw HTML, no unknown directives, no h1 in a body).
+ * calculator names, images, the Markdown dialect (no raw HTML, no unknown directives, no h1 in a body), and every
+ * worked calculator example against what the calculator computes.
  */
 export function checkContent(root: string, calculatorNames: readonly string[]): ContentReport {
   const { courses, problems } = loadContent(root);
@@ -39,17 +41,26 @@ export function checkContent(root: string, calculatorNames: readonly string[]): 
     for (const lesson of course.lessons) {
       lessons++;
       const ctx = { file: lesson.file, lineOffset: lesson.bodyLineOffset, images, calculatorNames };
-      checkBody(lesson.body, ctx, problems);
+      const embedded = checkBody(lesson.body, ctx, problems);
+      checkCalculatorExamples(
+        { file: lesson.file, body: lesson.body, examples: lesson.meta.calculatorExamples },
+        embedded.filter((e) => calculatorNames.includes(e.name)),
+        problems,
+      );
     }
   }
   problems.sort((a, b) => a.file.localeCompare(b.file) || a.line - b.line);
   return { problems, courses: courses.length, lessons };
 }
 
-function checkBody(body: string, ctx: BodyContext, problems: ContentProblem[]) {
+/** Checks one body and returns the calculators it embeds, with their lines. */
+function checkBody(body: string, ctx: BodyContext, problems: ContentProblem[]): EmbeddedCalculator[] {
   const tree: Root = parseLessonMarkdown(body);
+  const lineOf = (node: { position?: { start: { line: number } } }) =>
+    (node.position?.start.line ?? 1) + ctx.lineOffset;
   const report = (node: { position?: { start: { line: number } } }, message: string) =>
-    problems.push({ file: ctx.file, line: (node.position?.start.line ?? 1) + ctx.lineOffset, message });
+    problems.push({ file: ctx.file, line: lineOf(node), message });
+  const embedded: EmbeddedCalculator[] = [];
 
   visit(tree, (node) => {
     switch (node.type) {
@@ -72,6 +83,7 @@ function checkBody(body: string, ctx: BodyContext, problems: ContentProblem[]) {
           if (!name) report(node, 'calculator directive without a name: write ::calculator{name="..."}');
           else if (!ctx.calculatorNames.includes(name))
             report(node, `unknown calculator "${name}" (known: ${ctx.calculatorNames.join(', ')})`);
+          if (name) embedded.push({ name, line: lineOf(node) });
         } else if (node.name === 'caution') {
           report(node, 'a caution is a block: open it with :::caution and close it with :::');
         } else {
@@ -83,6 +95,7 @@ function checkBody(body: string, ctx: BodyContext, problems: ContentProblem[]) {
         break;
     }
   });
+  return embedded;
 }
 
 function checkImage(url: string, ctx: BodyContext, report: (message: string) => void) {

@@ -95,6 +95,14 @@ describe('dividing', () => {
     expect(results.solutions[0].instruction).toContain('16 holes counting the one the pin starts in');
   });
 
+  it('when 900 divisions or a 5-hole circle are asked for, then warnings say they are far outside bench practice', () => {
+    expect(dividing.compute({ teeth: 900 }).warnings.join(' ')).toMatch(/division of 900 parts is far outside/);
+    expect(dividing.compute({ teeth: 60, circles: [5, 24] }).warnings.join(' ')).toMatch(
+      /hole circle of 5 holes is far outside bench practice/,
+    );
+    expect(dividing.compute({ teeth: 60 }).warnings).toEqual([]);
+  });
+
   it('when the teeth are zero or fractional, then the input is rejected', () => {
     expect(() => dividing.compute({ teeth: 0 })).toThrow(ZodError);
     expect(() => dividing.compute({ teeth: 12.5 })).toThrow(ZodError);

@@ -114,6 +114,18 @@ describe('planting', () => {
     expect(warnings).toHaveLength(4);
   });
 
+  it('when an arbor is planted 0.5 mm from another or 9 m from the datum, then warnings say it is far outside bench practice', () => {
+    const close = planting.compute({
+      arbors: [
+        { name: 'A', x: 0, y: 0 },
+        { name: 'B', from: 'A', distance: 0.5, angleDeg: 0 },
+      ],
+    });
+    expect(close.warnings.join(' ')).toMatch(/centre distance A → B of 0\.5 mm is far outside bench practice/);
+    const far = planting.compute({ arbors: [{ name: 'A', x: 9000, y: 0 }] });
+    expect(far.warnings.join(' ')).toMatch(/A lies 9000 mm from the datum/);
+  });
+
   it('when the first arbor is not placed by coordinates, then the input is rejected', () => {
     expect(() => planting.compute({ arbors: [{ name: 'A', from: 'B', distance: 5, angleDeg: 0 }] })).toThrow(ZodError);
   });

@@ -1,12 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { ZodError } from 'zod';
-import {
-  CLICK_SPRING_MATERIALS,
-  springTemper,
-  type SpringTemperInput,
-  type SpringTemperResults,
-} from '../../../shared/calc/spring-temper';
+import { springTemper, type SpringTemperInput, type SpringTemperResults } from '../../../shared/calc/spring-temper';
 import { cToF, fToC, inchToMm, mmToInch } from '../../../shared/units/convert';
 import { numericLeaves } from './numeric-leaves';
 
@@ -17,8 +12,6 @@ function resultsOf<M extends Mode>(input: SpringTemperInput & { mode: M }) {
 const steel = (over: Partial<Extract<SpringTemperInput, { mode: 'steel' }>> = {}) =>
   resultsOf({ mode: 'steel', ...over });
 const brass = (numbersHard: number) => resultsOf({ mode: 'brass', numbersHard });
-const click = { mode: 'click-spring', widthMm: 2, thicknessMm: 0.3, lengthMm: 20, deflectionMm: 1 } as const;
-const modulus = (id: string) => CLICK_SPRING_MATERIALS.find((m) => m.id === id)?.youngsModulusGPa;
 
 describe('spring-temper: steel', () => {
   it('when steel is tempered at 310 °C, then it shows light blue, the springs colour (Sheffield Gauge Plate chart)', () => {
@@ -73,6 +66,39 @@ describe('spring-temper: steel', () => {
     expect(results.hardnessAtTemperatureHrc).toBeNull();
     expect(results.hardnessCurve).toEqual([]);
     expect(out.warnings.join(' ')).toMatch(/silver steel/);
+  });
+
+  it('when O1 is wanted as a flat spring, then it is tempered at 425–480 °C (800–900 °F) for 49–44 HRC (Eastern Tool Steel O-1 data sheet)', () => {
+    expect(steel().springTemper).toMatchObject({
+      temperatureC: { min: 425, max: 480 },
+      temperatureF: { min: 800, max: 900 },
+      hrc: { min: 44, max: 49 },
+    });
+    expect(steel({ temperatureC: 425 }).hardnessAtTemperatureHrc).toBe(49);
+    expect(steel({ temperatureC: 480 }).hardnessAtTemperatureHrc).toBe(44);
+  });
+
+  it('when O1 is tempered at the light-blue heat, then it is still 56 HRC and a warning says to temper springs by thermometer (Eastern Tool Steel O-1 data sheet: 600 °F/315 °C, 56 HRC)', () => {
+    const out = springTemper.compute({ mode: 'steel', steel: 'O1', colour: 'Light blue' });
+    expect(out.warnings.join(' ')).toMatch(/about 56 HRC.*425–480 °C.*by thermometer, not by colour/);
+    expect(steel({ temperatureC: 315 }).hardnessAtTemperatureHrc).toBe(56);
+  });
+
+  it('when 1095 is wanted as a flat spring, then it is drawn at 700–800 °F for RC 49–45 (Mead Metals, ASTM A684 suggested heat treatments)', () => {
+    expect(steel({ steel: '1095' }).springTemper).toMatchObject({
+      temperatureF: { min: 700, max: 800 },
+      hrc: { min: 45, max: 49 },
+    });
+    // 700 °F = 371 °C and 800 °F = 427 °C (computed)
+    expect(steel({ steel: '1095' }).springTemper?.temperatureC).toEqual({
+      min: Math.round(fToC(700)),
+      max: Math.round(fToC(800)),
+    });
+    expect(springTemper.compute({ mode: 'steel', steel: '1095', temperatureC: 310 }).warnings).toEqual([]);
+  });
+
+  it('when silver steel is chosen, then no spring temper is claimed, for want of a table', () => {
+    expect(steel({ steel: 'silver' }).springTemper).toBeNull();
   });
 
   it('when the temperature is a hardening heat, then no colour or hardness is given and warnings say why', () => {
@@ -152,45 +178,6 @@ describe('spring-temper: brass', () => {
   it('when the numbers hard are fractional or negative, then compute throws a ZodError', () => {
     expect(() => springTemper.compute({ mode: 'brass', numbersHard: 2.5 })).toThrow(ZodError);
     expect(() => springTemper.compute({ mode: 'brass', numbersHard: -1 })).toThrow(ZodError);
-  });
-});
-
-describe('spring-temper: click spring', () => {
-  it.each([
-    { E: 206, force: 0.348, stress: 231.8 },
-    { E: 110, force: 0.186, stress: 123.8 },
-    { E: 97, force: 0.164, stress: 109.1 },
-  ])('when b 2, t 0.3, L 20, δ 1 mm with E = $E GPa, then F = $force N and σ = $stress MPa (computed)', (row) => {
-    const out = resultsOf({ ...click, youngsModulusGPa: row.E });
-    expect(out.forceN).toBeCloseTo(row.force, 3);
-    // The table rounds to 0.1 MPa (231.75 prints as 231.8), so allow half a step.
-    expect(Math.abs(out.stressMPa - row.stress)).toBeLessThanOrEqual(0.05 + 1e-9);
-    expect(out.stiffnessNPerMm).toBeCloseTo(out.forceN, 12);
-  });
-
-  it('when no modulus is given, then spring steel’s 206 GPa is used (Tokai Bane "Flat springs formulas", Table 2)', () => {
-    expect(modulus('spring-steel')).toBe(206);
-    expect(resultsOf(click).forceN).toBeCloseTo(0.348, 3);
-  });
-
-  it('when the presets are read, then C26000 is 110 GPa and leaded brass 100 GPa (makeitfrom.com)', () => {
-    expect(modulus('c26000-half-hard')).toBe(110);
-    expect(modulus('leaded-brass')).toBe(100);
-  });
-
-  it('when spring-temper C26000 is chosen, then its yield is 595 MPa (olinbrass.com "C26000 (ASTM B36) Cartridge Brass")', () => {
-    expect(CLICK_SPRING_MATERIALS.find((m) => m.id === 'c26000-spring')?.yieldStrengthMPa).toBe(595);
-  });
-
-  it('when the stress passes the yield, then the ratio is over 1 and a warning says the spring will take a set', () => {
-    const out = springTemper.compute({ ...click, youngsModulusGPa: 110, deflectionMm: 3, yieldStrengthMPa: 350 });
-    expect((out.results as Extract<SpringTemperResults, { mode: 'click-spring' }>).stressToYield).toBeGreaterThan(1);
-    expect(out.warnings.join(' ')).toMatch(/take a set/);
-  });
-
-  it('when the deflection is more than a tenth of the length, then a warning says the formula stops holding', () => {
-    expect(springTemper.compute({ ...click, deflectionMm: 3 }).warnings.join(' ')).toMatch(/stops holding/);
-    expect(springTemper.compute(click).warnings).toEqual([]);
   });
 });
 

@@ -150,6 +150,28 @@ describe('train-pendulum', () => {
     expect(warnings.some((w) => w.includes('110 beats per hour'))).toBe(true);
   });
 
+  it('when the train is 3.3 % off the beat wanted, then a warning says how much a day the hands would lose (computed)', () => {
+    // 80/12 × 72/8 × 31 × 2 = 3720 BPH; a 3600 BPH pendulum turns the centre wheel in 3720/3600 h, so the hands lose
+    // 86 400 × (1 − 3600/3720) = 2787 s a day (computed).
+    const { warnings } = trainPendulum.compute({
+      wheelTeeth: [80, 72],
+      pinionLeaves: [12, 8],
+      escapeTeeth: 31,
+      targetBeatsPerHour: 3600,
+    });
+    expect(warnings.join(' ')).toMatch(/3720 beats an hour, 3\.33333 % over the 3600 wanted.*lose 2787\.1 s a day/);
+  });
+
+  it('when the train gives exactly the beat wanted, then no beat warning is given', () => {
+    const { warnings } = trainPendulum.compute({
+      wheelTeeth: [80, 72],
+      pinionLeaves: [12, 8],
+      escapeTeeth: 30,
+      targetBeatsPerHour: 3600,
+    });
+    expect(warnings.join(' ')).not.toMatch(/wanted/);
+  });
+
   it('when wheels and pinions differ in number, then the input is rejected', () => {
     expect(() => trainPendulum.compute({ wheelTeeth: [80, 72], pinionLeaves: [12], escapeTeeth: 30 })).toThrow(
       ZodError,

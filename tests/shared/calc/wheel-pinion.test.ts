@@ -34,13 +34,29 @@ describe('wheel-pinion', () => {
   });
 
   it("when the pinion has 8 leaves at module 1, then Goodrich's wheel addendum is 1.40 mm", () => {
-    // W. L. Goodrich, The Modern Clock (1905), pinion chapter: 7/20 of the pinion pitch radius = 1.40 m
+    // W. L. Goodrich, The Modern Clock (1905), pinion chapter: 7/20 of the pinion pitch radius = 0.35 × 4m = 1.40 m
     const { results } = wheelPinion.compute({ moduleMm: 1, wheelTeeth: 64, pinionLeaves: 8 });
     expect(results.goodrichWheelAddendumMm).toBeCloseTo(1.4, 9);
   });
 
-  it('when a lantern pinion is used, then the centre distance is the sum of the pitch radii', () => {
-    // AWCI "Clockmaking standard: Lantern pinion depthing": correct depth = sum of the pitch radii
+  it("when the pinion has 6, 10 or 12 leaves, then Goodrich's 8-leaf rule is not applied and the steps name the forum rule instead", () => {
+    // W. L. Goodrich, The Modern Clock (1905): the 7/20 rule is stated for the eight-leaf pinion only.
+    for (const pinionLeaves of [6, 10, 12]) {
+      const out = wheelPinion.compute({ moduleMm: 1, wheelTeeth: 72, pinionLeaves });
+      expect(out.results.goodrichWheelAddendumMm).toBeNull();
+      const step = out.steps.find((x) => x.label === "Goodrich's wheel addendum");
+      expect(step?.result).toBe('not applied');
+      expect(step?.formula).toMatch(/forum blank rule above governs/);
+    }
+  });
+
+  it('when the wheel addendum is given, then its step says it comes from a forum post, not a standard', () => {
+    const out = wheelPinion.compute({ moduleMm: 1, wheelTeeth: 64, pinionLeaves: 8 });
+    expect(out.steps.some((x) => /^Wheel addendum \(forum post: A\. Wolff/.test(x.label))).toBe(true);
+  });
+
+  it('when a module 1 wheel of 60 drives a lantern pinion of 8, then the centres are 30 + 4 = 34 mm apart (AWCI "Clockmaking standard: Lantern pinion depthing": depth = sum of the pitch radii)', () => {
+    // Pitch radii worked here from d = m·z: 60/2 = 30 mm and 8/2 = 4 mm (computed).
     const { results } = wheelPinion.compute({
       moduleMm: 1,
       wheelTeeth: 60,
@@ -48,16 +64,35 @@ describe('wheel-pinion', () => {
       pinionKind: 'lantern',
       trundleDiameterMm: 1.2,
     });
-    expect(results.centreDistanceMm).toBeCloseTo(
-      results.wheelPitchDiameterMm / 2 + results.pinionPitchDiameterMm / 2,
-      9,
-    );
+    expect(results.centreDistanceMm).toBeCloseTo(30 + 4, 9);
     expect(results.pinionBlankDiameterMm).toBeCloseTo(9.2, 9); // 8 mm + one trundle (computed)
+    expect(results.trundleBacklashMm).toBeCloseTo(Math.PI / 2 - 1.2, 9);
     expect(results.trundleFits).toBe(true);
   });
 
-  it('when module 0.5 drives 64 : 8, then the pitch diameters are 32 and 4 mm and the centres 18 mm apart', () => {
-    // (computed) d = m·z, a = m(z₁ + z₂)/2
+  it('when a lantern trundle fills the tooth space with no play, then it does not read "fits" and a warning says it binds', () => {
+    // Tooth space at module 1: π/2 = 1.5708 mm; a 1.5707 mm trundle leaves 0.0001 mm of play (computed).
+    const out = wheelPinion.compute({
+      moduleMm: 1,
+      wheelTeeth: 64,
+      pinionLeaves: 8,
+      pinionKind: 'lantern',
+      trundleDiameterMm: 1.5707,
+    });
+    expect(out.results.trundleFits).toBe(false);
+    expect(out.warnings.join(' ')).toMatch(/binds/);
+    const exact = wheelPinion.compute({
+      moduleMm: 1,
+      wheelTeeth: 64,
+      pinionLeaves: 8,
+      pinionKind: 'lantern',
+      trundleDiameterMm: Math.PI / 2,
+    });
+    expect(exact.results.trundleFits).toBe(false);
+  });
+
+  it('when module 0.5 drives 64 : 8, then the pitch diameters are 32 and 4 mm and the centres 18 mm apart (TRADE.md §4, computed)', () => {
+    // Worked here: 0.5 × 64 = 32 mm, 0.5 × 8 = 4 mm, (32 + 4)/2 = 18 mm (computed).
     const { results, warnings } = wheelPinion.compute({ moduleMm: 0.5, wheelTeeth: 64, pinionLeaves: 8 });
     expect(results.wheelPitchDiameterMm).toBeCloseTo(32, 9);
     expect(results.pinionPitchDiameterMm).toBeCloseTo(4, 9);
@@ -96,6 +131,11 @@ describe('wheel-pinion', () => {
   it('when the module is zero or the teeth fractional, then the input is rejected', () => {
     expect(() => wheelPinion.compute({ moduleMm: 0, wheelTeeth: 64, pinionLeaves: 8 })).toThrow(ZodError);
     expect(() => wheelPinion.compute({ moduleMm: 1, wheelTeeth: 64.5, pinionLeaves: 8 })).toThrow(ZodError);
+  });
+
+  it('when a wheel of 1000 teeth is asked for, then a warning says it is far outside bench practice', () => {
+    const { warnings } = wheelPinion.compute({ moduleMm: 0.1, wheelTeeth: 1000, pinionLeaves: 8 });
+    expect(warnings.join(' ')).toMatch(/wheel of 1000 teeth is far outside bench practice/);
   });
 
   it('when the wheel has few teeth and the pinion many leaves, then both leave the rules and warnings say so', () => {

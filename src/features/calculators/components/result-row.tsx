@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import type { Quantity } from '@shared/calc/types';
-import { formatNumber, toDisplay, unitLabel, withUnit } from '../lib/units';
+import { decimalsIn, formatFixed, formatNumber, toDisplay, unitLabel, withUnit } from '../lib/units';
 import { useCalcForm } from './calculator-context';
 
 /** The list the rows sit in: a definition list, so each figure is read with its name. */
@@ -15,18 +15,24 @@ interface ResultRowProps {
   quantity: Quantity;
   unit?: string;
   significant?: number;
+  /** Fixed decimals in the calculator's unit, for figures whose precision is what was measured; overrides `significant`. */
+  decimals?: number;
   /** The figure the user came for: larger type. */
   main?: boolean;
   note?: ReactNode;
 }
 
 /** One result with its unit, converted to the user's units where the quantity has another. */
-export function ResultRow({ label, value, quantity, unit, significant = 4, main, note }: ResultRowProps) {
+export function ResultRow({ label, value, quantity, unit, significant = 4, decimals, main, note }: ResultRowProps) {
   const { unitSystem } = useCalcForm();
   const shown = value === null || value === undefined ? NaN : toDisplay(value, quantity, unitSystem);
+  const text =
+    decimals === undefined
+      ? formatNumber(shown, significant)
+      : formatFixed(shown, decimalsIn(quantity, unitSystem, decimals));
   return (
     <ResultLine label={label} main={main} note={note}>
-      {withUnit(formatNumber(shown, significant), unit ?? unitLabel(quantity, unitSystem))}
+      {withUnit(text, unit ?? unitLabel(quantity, unitSystem))}
     </ResultLine>
   );
 }

@@ -67,6 +67,25 @@ export function formatNumber(value: number, significant = 4): string {
   return Math.abs(rounded) >= 10_000 ? rounded.toLocaleString('en-GB').replace(/,/g, '\u2009') : String(rounded);
 }
 
+/**
+ * A number to fixed decimals, for figures whose precision is what the bench measures (whole HRC, tilt to 0.01°,
+ * fusee radii to 0.01 mm, pendulum length to 0.1 mm). Anything not finite is a dash.
+ */
+export function formatFixed(value: number, decimals: number): string {
+  if (!Number.isFinite(value)) return '—';
+  const text = value.toFixed(decimals);
+  // "-0.0" says nothing a plain 0 does not.
+  return Number(text) === 0 ? (0).toFixed(decimals) : text;
+}
+
+/**
+ * Decimals for a figure given to `metricDecimals` in the calculator's unit, in the user's unit: an inch is 25.4 mm, so
+ * inches need two more places for the same step (0.01 mm ≈ 0.0004 in); °F and ounces keep the metric count.
+ */
+export function decimalsIn(quantity: Quantity, system: UnitSystem, metricDecimals: number): number {
+  return quantity === 'length' && system === 'imperial' ? metricDecimals + 2 : metricDecimals;
+}
+
 /** Value and unit as one string; degrees sit on the figure, every other unit takes a thin gap. */
 export function withUnit(text: string, unit: string): string {
   if (!unit) return text;

@@ -4,7 +4,7 @@ import { formatNumber } from '../../lib/units';
 interface Props {
   /** Spring torque per turn, from the adjusting-rod readings, in N·mm. */
   springTorqueNmm: number[];
-  /** Torque at the fusee arbor per turn after the fusee radii, in N·mm. */
+  /** Torque at the fusee arbor per turn after the fusee radii, in N·mm; empty until the chain radius is known. */
   fuseeTorqueNmm: number[];
 }
 
@@ -13,6 +13,7 @@ const STEEL = '#2b4c7e';
 
 /** The spring's rising torque beside the level torque the fusee gives, one point per turn of winding. */
 export function TorquePlot({ springTorqueNmm, fuseeTorqueNmm }: Props) {
+  const withFusee = fuseeTorqueNmm.length > 0;
   const data = springTorqueNmm.map((spring, i) => ({ turn: i + 1, spring, fusee: fuseeTorqueNmm[i] }));
   const label = (v: unknown) => `${formatNumber(Number(v), 4)} N·mm`;
   return (
@@ -42,20 +43,23 @@ export function TorquePlot({ springTorqueNmm, fuseeTorqueNmm }: Props) {
               strokeWidth={2}
               isAnimationActive={false}
             />
-            <Line
-              name="Torque at the fusee arbor"
-              dataKey="fusee"
-              stroke={STEEL}
-              strokeWidth={2}
-              strokeDasharray="6 3"
-              isAnimationActive={false}
-            />
+            {withFusee && (
+              <Line
+                name="Torque at the fusee arbor"
+                dataKey="fusee"
+                stroke={STEEL}
+                strokeWidth={2}
+                strokeDasharray="6 3"
+                isAnimationActive={false}
+              />
+            )}
           </LineChart>
         </ResponsiveContainer>
       </div>
       <figcaption className="text-sm text-muted">
-        The brass line is the spring as measured; the blue dashed line is what reaches the fusee arbor once the chain
-        runs on the radii below. A level blue line means the fusee evens the pull.
+        {withFusee
+          ? 'The brass line is the spring as measured; the blue dashed line is what reaches the fusee arbor once the chain runs on the radii below. A level blue line means the fusee evens the pull.'
+          : 'The brass line is the spring as measured. Give the largest fusee radius and the chain radius on the barrel to add what reaches the fusee arbor.'}
       </figcaption>
     </figure>
   );

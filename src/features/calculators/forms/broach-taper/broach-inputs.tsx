@@ -1,10 +1,24 @@
 import { taperFromDiameters, taperFromRatio } from '@shared/calc/broach-taper';
 import { useCalcForm } from '../../components/calculator-context';
-import { ModeChoice, TextInputField } from '../../components/choice-fields';
+import { ChoiceField, ModeChoice, TextInputField } from '../../components/choice-fields';
 import { NumberField } from '../../components/number-field';
 import { describeIssue } from '../../lib/describe-issue';
 import { num } from '../../lib/draft';
 import { formatNumber } from '../../lib/units';
+
+const SIDES = [
+  { value: '5', label: 'Five sides (read corner to flat)' },
+  { value: '3', label: 'Three sides (read corner to flat)' },
+  { value: '7', label: 'Seven sides (read corner to flat)' },
+  { value: '4', label: 'Four sides (read corner to corner)' },
+  { value: '6', label: 'Six sides (read corner to corner)' },
+  { value: '0', label: 'Round, or readings already cutting diameters' },
+] as const;
+
+const OPENED_FROM = [
+  { value: 'both', label: 'Both faces' },
+  { value: 'one', label: 'One face' },
+] as const;
 
 const TAPER_FROM = [
   { value: 'taper', label: 'Taper' },
@@ -34,6 +48,12 @@ export function BroachInputs() {
   const fromReadings = taperFromDiameters(num(draft.d1Mm) ?? NaN, num(draft.d2Mm) ?? NaN, num(draft.spanMm) ?? NaN);
   return (
     <>
+      <ChoiceField
+        name="broachSides"
+        label="Section of the cutting broach"
+        choices={SIDES}
+        hint="Across an odd number of sides the micrometer reads less than the corners cut; the calculator allows for it."
+      />
       <ModeChoice name="taperFrom" legend="Broach taper from" choices={TAPER_FROM} />
       {from === 'taper' && (
         <NumberField
@@ -88,11 +108,27 @@ export function BroachInputs() {
         name="refDiameterMm"
         label="Broach diameter at your reference mark"
         quantity="length"
-        hint="The insertion depth is measured from this mark."
+        hint="The micrometer reading there; the insertion depth is measured from this mark."
       />
-      <NumberField name="targetDiameterMm" label="Target hole diameter" quantity="length" />
+      <ModeChoice name="openedFrom" legend="Hole opened from" choices={OPENED_FROM} />
+      <NumberField
+        name="targetDiameterMm"
+        label="Target hole diameter at its narrowest"
+        quantity="length"
+        hint={
+          draft.openedFrom === 'one'
+            ? 'Opened from one face, the hole is narrowest at the far face.'
+            : 'Opened from both faces to the same mark, the hole is narrowest at mid-plate.'
+        }
+      />
       <NumberField name="plateThicknessMm" label="Plate thickness" quantity="length" />
       <NumberField name="pivotDiameterMm" label="Pivot diameter" quantity="length" />
+      <NumberField
+        name="pivotLengthMm"
+        label="Pivot length, shoulder to end (if shorter than the plate)"
+        quantity="length"
+        hint="Leave blank when the pivot passes right through the plate."
+      />
     </>
   );
 }

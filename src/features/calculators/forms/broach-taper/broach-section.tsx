@@ -1,10 +1,7 @@
-import { useState } from 'react';
 import type { z } from 'zod';
 import type { BroachTaperInput } from '@shared/calc/broach-taper';
 import { useCalcForm } from '../../components/calculator-context';
-import { formatNumber, fromDisplay, unitLabel, withUnit } from '../../lib/units';
-
-type Opened = 'one' | 'both';
+import { formatFixed, formatNumber, fromDisplay, unitLabel, withUnit } from '../../lib/units';
 
 // Scale bars read best at a round length of about a quarter of the drawing.
 const NICE = {
@@ -14,20 +11,29 @@ const NICE = {
 
 /**
  * A section through the plate at the hole, in millimetres, so it is to scale on screen and on paper: the hole as the
- * broach leaves it (tapered from one face, or from both to the middle) and the pivot at the tilt the hole allows.
+ * broach leaves it (tapered from the entry face, or from both faces to the middle) and the pivot at the tilt the hole
+ * allows. The entry face is at the top.
  */
-export function BroachSection({ input, tiltDeg }: { input: z.output<typeof BroachTaperInput>; tiltDeg: number }) {
+export function BroachSection({
+  input,
+  entryDiameterMm,
+  tiltDeg,
+}: {
+  input: z.output<typeof BroachTaperInput>;
+  entryDiameterMm: number;
+  tiltDeg: number;
+}) {
   const { unitSystem } = useCalcForm();
-  const [opened, setOpened] = useState<Opened>('both');
-  const { targetDiameterMm: D, pivotDiameterMm: d, plateThicknessMm: t, taperPerMm: k } = input;
-  const margin = Math.max(D, t) * 0.9;
-  const W = D + 2 * margin;
-  const over = 0.5 * t + 0.3 * D;
+  const { targetDiameterMm: D, pivotDiameterMm: d, plateThicknessMm: t, openedFrom } = input;
+  const margin = Math.max(entryDiameterMm, t) * 0.9;
+  const W = entryDiameterMm + 2 * margin;
+  const over = 0.5 * t + 0.3 * entryDiameterMm;
   const fs = W / 24;
-  const top = D / 2;
-  // Either way the diameter at mid-plate is k·t/2 under the face the broach entered.
-  const mid = (D - (k * t) / 2) / 2;
-  const bottom = opened === 'both' ? D / 2 : (D - k * t) / 2;
+  const top = entryDiameterMm / 2;
+  const both = openedFrom === 'both';
+  // Both faces: the entry diameter at each face, the target at mid-plate. One face: a straight taper to the target.
+  const mid = both ? D / 2 : (entryDiameterMm + D) / 4;
+  const bottom = both ? entryDiameterMm / 2 : D / 2;
   const side = (s: 1 | -1) =>
     [
       [s * (W / 2), 0],
@@ -49,7 +55,7 @@ export function BroachSection({ input, tiltDeg }: { input: z.output<typeof Broac
       <svg
         viewBox={`${-W / 2} ${-over} ${W} ${t + 2 * over + fs * 3}`}
         role="img"
-        aria-label={`Section through the plate, to scale: a ${formatNumber(D)} mm hole in a ${formatNumber(t)} mm plate with a ${formatNumber(d)} mm pivot tilted ${formatNumber(tiltDeg, 3)}°`}
+        aria-label={`Section through the plate, to scale: a hole of ${formatNumber(entryDiameterMm)} mm at the entry face and ${formatNumber(D)} mm at its narrowest, opened from ${both ? 'both faces' : 'one face'}, in a ${formatNumber(t)} mm plate, with a ${formatNumber(d)} mm pivot tilted ${formatFixed(tiltDeg, 2)}°`}
         className="mx-auto h-auto max-h-72 w-full max-w-md"
       >
         <polygon points={side(-1)} fill="#e2cf9f" stroke="#7d5f22" strokeWidth={1} vectorEffect="non-scaling-stroke" />
@@ -79,25 +85,10 @@ export function BroachSection({ input, tiltDeg }: { input: z.output<typeof Broac
           {withUnit(formatNumber(barShown), unit)}
         </text>
       </svg>
-      <figcaption className="mt-2 space-y-2 text-sm text-muted">
-        <span className="block">
-          Section through the plate, to scale (brass plate, steel pivot). The pivot leans as far as a straight hole of
-          the target size lets it.
-        </span>
-        <span className="no-print flex flex-wrap items-center gap-2">
-          Draw the hole as opened from
-          {(['one', 'both'] as const).map((o) => (
-            <button
-              key={o}
-              type="button"
-              aria-pressed={opened === o}
-              onClick={() => setOpened(o)}
-              className="min-h-11 rounded-md border border-rule px-3 text-ink aria-pressed:border-steel aria-pressed:bg-steel/10 aria-pressed:font-semibold"
-            >
-              {o === 'one' ? 'one face' : 'both faces'}
-            </button>
-          ))}
-        </span>
+      <figcaption className="mt-2 text-sm text-muted">
+        Section through the plate, to scale (brass plate, steel pivot), the entry face at the top, opened from{' '}
+        {both ? 'both faces to the same mark' : 'one face'}. The taper is true to scale, so it is hard to see; the pivot
+        leans as far as this hole lets it.
       </figcaption>
     </figure>
   );

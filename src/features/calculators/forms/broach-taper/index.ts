@@ -19,7 +19,8 @@ function taper(d: Draft): number | undefined {
 
 export const broachTaperForm = defineForm({
   calculator: broachTaper,
-  // TRADE.md §1 check values: k = 1/50, broach 0.50 mm at the mark, target 1.05 mm, 2.0 mm plate, 1.00 mm pivot.
+  // The broaching lesson's example: Ruth's five-sided cutting broach reads 0.50 mm at the tip and 1.00 mm 25 mm along
+  // (k = 0.02); a 2.0 mm plate opened from both faces to 1.05 mm at mid-plate for a 1.00 mm pivot.
   initial: {
     taperFrom: 'taper',
     taperPerMm: '0.02',
@@ -27,10 +28,13 @@ export const broachTaperForm = defineForm({
     d2Mm: '',
     spanMm: '25',
     ratio: '1:50',
+    broachSides: '5',
+    openedFrom: 'both',
     refDiameterMm: '0.5',
     targetDiameterMm: '1.05',
     plateThicknessMm: '2',
     pivotDiameterMm: '1',
+    pivotLengthMm: '',
   },
   toInput: (d) => ({
     taperPerMm: taper(d) as number,
@@ -38,14 +42,20 @@ export const broachTaperForm = defineForm({
     targetDiameterMm: num(d.targetDiameterMm) as number,
     plateThicknessMm: num(d.plateThicknessMm) as number,
     pivotDiameterMm: num(d.pivotDiameterMm) as number,
+    broachSides: num(d.broachSides) as number,
+    openedFrom: d.openedFrom === 'one' ? ('one' as const) : ('both' as const),
+    pivotLengthMm: num(d.pivotLengthMm),
   }),
   fromInput: (input) => ({
     taperFrom: 'taper',
     taperPerMm: String(input.taperPerMm),
+    broachSides: String(input.broachSides),
+    openedFrom: input.openedFrom,
     refDiameterMm: String(input.refDiameterMm),
     targetDiameterMm: String(input.targetDiameterMm),
     plateThicknessMm: String(input.plateThicknessMm),
     pivotDiameterMm: String(input.pivotDiameterMm),
+    pivotLengthMm: input.pivotLengthMm === undefined ? '' : String(input.pivotLengthMm),
   }),
   Inputs: BroachInputs,
   Results: BroachResults,

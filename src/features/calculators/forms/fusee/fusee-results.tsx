@@ -13,33 +13,56 @@ const percent = (x: number) => formatNumber(Math.abs(x) < 0.005 ? 0 : x, 3);
 // recharts is large; it loads when the first readings need plotting.
 const TorquePlot = lazy(() => import('../../components/plots/torque-plot').then((m) => ({ default: m.TorquePlot })));
 
+function Note({ children }: { children: string }) {
+  return <p className="mt-4 rounded-md border border-dashed border-rule p-3 text-sm text-muted">{children}</p>;
+}
+
 export function FuseeResults({ output, input }: { output: CalcOutput<Results>; input: z.output<typeof FuseeInput> }) {
   const r = output.results;
   const given = input.springLengthMm !== undefined;
+  const curve = r.torqueCurve.length > 0;
   return (
     <>
       <ResultList>
-        <ResultRow
-          label={given ? 'Spring length (as given)' : 'Spring length at half fill'}
-          value={r.springLengthMm}
-          quantity="length"
-          significant={5}
-          main={!given}
-        />
-        <ResultRow label="Turns of the barrel" value={r.turns} quantity="count" unit="turns" main />
-        <ResultRow label="Coils wound up, on the arbor" value={r.coilsWoundUp} quantity="count" unit="coils" />
-        <ResultRow label="Coils run down, against the barrel" value={r.coilsRunDown} quantity="count" unit="coils" />
+        {r.springLengthMm !== null && (
+          <ResultRow
+            label={given ? 'Spring length (as given)' : 'Spring length at half fill'}
+            value={r.springLengthMm}
+            quantity="length"
+            significant={5}
+            main={!given}
+          />
+        )}
+        {r.turns !== null && (
+          <>
+            <ResultRow label="Turns of the barrel" value={r.turns} quantity="count" unit="turns" main />
+            <ResultRow label="Coils wound up, on the arbor" value={r.coilsWoundUp} quantity="count" unit="coils" />
+            <ResultRow
+              label="Coils run down, against the barrel"
+              value={r.coilsRunDown}
+              quantity="count"
+              unit="coils"
+            />
+          </>
+        )}
         {r.stiffnessNmmPerRad !== undefined && (
           <>
             <ResultRow label="Stiffness" value={r.stiffnessNmmPerRad} quantity="torque" unit="N·mm/rad" />
             <ResultRow label="Torque added per turn" value={r.torquePerTurnNmm} quantity="torque" />
           </>
         )}
+        {r.chainRadiusMm !== null && (
+          <ResultRow
+            label="Chain radius on the barrel"
+            value={r.chainRadiusMm}
+            quantity="length"
+            decimals={2}
+            note={input.chainRadiusMm === undefined ? 'Offered from the outside diameter and the chain.' : undefined}
+          />
+        )}
       </ResultList>
-      {r.radiiMm.length === 0 ? (
-        <p className="mt-4 rounded-md border border-dashed border-rule p-3 text-sm text-muted">
-          Enter adjusting-rod readings to see the torque curve and the fusee radii.
-        </p>
+      {!curve ? (
+        <Note>Enter adjusting-rod readings to see the torque curve and the fusee radii.</Note>
       ) : (
         <div className="mt-6 space-y-4">
           <h3 className="font-serif text-lg font-semibold">Torque curve</h3>
@@ -51,13 +74,18 @@ export function FuseeResults({ output, input }: { output: CalcOutput<Results>; i
           </Suspense>
           <ResultList>
             <ResultLine label="Spread of the torque" main>
-              {percent(r.spreadBeforePercent)} % → {percent(r.spreadAfterPercent)} %
+              {percent(r.spreadBeforePercent)} %
+              {r.spreadAfterPercent !== null && ` → ${percent(r.spreadAfterPercent)} %`}
             </ResultLine>
           </ResultList>
           <p className="text-sm text-muted">
             Spread is (largest − smallest) / mean: the spring alone, then at the fusee arbor with these radii.
           </p>
-          <RadiiTable readings={input.readings} results={r} />
+          {r.radiiMm.length > 0 ? (
+            <RadiiTable readings={input.readings} results={r} />
+          ) : (
+            <Note>Enter the largest fusee radius to see the radius for every turn.</Note>
+          )}
         </div>
       )}
     </>

@@ -1,16 +1,21 @@
 import type { FuseeResults } from '@shared/calc/fusee';
 import { useCalcForm } from '../../components/calculator-context';
-import { formatNumber, toDisplay, unitLabel } from '../../lib/units';
+import { decimalsIn, formatFixed, formatNumber, toDisplay, unitLabel } from '../../lib/units';
 
 interface Props {
   readings: { massG: number; distanceMm: number }[];
-  results: Pick<FuseeResults, 'torqueCurve' | 'radiiMm' | 'fuseeTorqueNmm'>;
+  results: Pick<FuseeResults, 'torqueCurve' | 'radiiMm' | 'fuseeTorqueNmm' | 'chainTensionN'>;
 }
 
-/** Per turn: the reading, the spring torque it means, the fusee radius that evens it, and what reaches the arbor. */
+/**
+ * Per turn: the reading, the spring torque it means, the fusee radius that evens it (to 0.01 mm, what a fusee is cut
+ * to), and, once the chain radius is known, the chain's pull and what reaches the arbor.
+ */
 export function RadiiTable({ readings, results }: Props) {
   const { unitSystem } = useCalcForm();
   const length = (mm: number) => formatNumber(toDisplay(mm, 'length', unitSystem), 4);
+  const radius = (mm: number) => formatFixed(toDisplay(mm, 'length', unitSystem), decimalsIn('length', unitSystem, 2));
+  const pull = results.fuseeTorqueNmm.length > 0;
   const mass = (g: number) => formatNumber(toDisplay(g, 'mass', unitSystem), 4);
   const lengthUnit = unitLabel('length', unitSystem);
   const massUnit = unitLabel('mass', unitSystem);
@@ -34,9 +39,16 @@ export function RadiiTable({ readings, results }: Props) {
             <th scope="col" className="py-1 pr-2 text-right">
               Fusee radius ({lengthUnit})
             </th>
-            <th scope="col" className="py-1 text-right">
-              At the fusee arbor (N·mm)
-            </th>
+            {pull && (
+              <>
+                <th scope="col" className="py-1 pr-2 text-right">
+                  Chain pull (N)
+                </th>
+                <th scope="col" className="py-1 text-right">
+                  At the fusee arbor (N·mm)
+                </th>
+              </>
+            )}
           </tr>
         </thead>
         <tbody className="num">
@@ -47,8 +59,13 @@ export function RadiiTable({ readings, results }: Props) {
                 {mass(readings[i].massG)} {massUnit} at {length(readings[i].distanceMm)} {lengthUnit}
               </td>
               <td className="py-1 pr-2 text-right">{formatNumber(results.torqueCurve[i].springTorqueNmm, 4)}</td>
-              <td className="py-1 pr-2 text-right font-semibold">{length(r)}</td>
-              <td className="py-1 text-right">{formatNumber(results.fuseeTorqueNmm[i], 4)}</td>
+              <td className="py-1 pr-2 text-right font-semibold">{radius(r)}</td>
+              {pull && (
+                <>
+                  <td className="py-1 pr-2 text-right">{formatNumber(results.chainTensionN[i], 4)}</td>
+                  <td className="py-1 text-right">{formatNumber(results.fuseeTorqueNmm[i], 4)}</td>
+                </>
+              )}
             </tr>
           ))}
         </tbody>

@@ -9,10 +9,11 @@ const MU = FRICTION_TABLE.map((r) => r.mu);
 const SPEED = SURFACE_SPEED_TABLE.map((r) => r.mPerMin);
 
 const initial: Draft = {
-  loadN: '10',
+  loadN: '1.42',
   leverArmMm: '0.75',
   pivotDiameterMm: '1',
-  bearingLengthMm: '',
+  bearingLengthMm: '1.5',
+  pivotLengthMm: '',
   allowableStressMPa: '200',
   friction: rowOf(0.19, MU),
   frictionCoefficient: '0.19',
@@ -22,13 +23,15 @@ const initial: Draft = {
 
 export const pivotBurnishForm = defineForm({
   calculator: pivotBurnish,
-  // TRADE.md §2 check values: F = 10 N, a = 0.75 mm, σ_allow = 200 MPa; a 1.0 mm pivot.
+  // The pivots lesson's third arbor of the class regulator: at most 1.42 N from a 3 kg weight through the train, on a
+  // 1.0 mm pivot with 1.5 mm in the hole, a = 0.75 mm, σ_allow = 200 MPa (common practice, no source).
   initial,
   toInput: (d) => ({
     loadN: num(d.loadN) as number,
     leverArmMm: num(d.leverArmMm) as number,
     pivotDiameterMm: num(d.pivotDiameterMm) as number,
     bearingLengthMm: num(d.bearingLengthMm),
+    pivotLengthMm: num(d.pivotLengthMm),
     allowableStressMPa: num(d.allowableStressMPa),
     frictionCoefficient: fromTable(d.friction, d.frictionCoefficient, MU),
     surfaceSpeedMPerMin: fromTable(d.speed, d.surfaceSpeedMPerMin, SPEED),
@@ -38,6 +41,7 @@ export const pivotBurnishForm = defineForm({
     leverArmMm: String(input.leverArmMm),
     pivotDiameterMm: String(input.pivotDiameterMm),
     bearingLengthMm: input.bearingLengthMm === undefined ? '' : String(input.bearingLengthMm),
+    pivotLengthMm: input.pivotLengthMm === undefined ? '' : String(input.pivotLengthMm),
     allowableStressMPa: String(input.allowableStressMPa),
     friction: rowOf(input.frictionCoefficient, MU),
     frictionCoefficient: String(input.frictionCoefficient),

@@ -24,7 +24,12 @@ export function PivotInputs() {
   const speedRow = SURFACE_SPEED_TABLE[Number(draft.speed)];
   return (
     <>
-      <NumberField name="loadN" label="Load on the pivot" quantity="force" />
+      <NumberField
+        name="loadN"
+        label="Load on the pivot"
+        quantity="force"
+        hint="Work it from the driving weight or spring and the train: in a weight-driven regulator it is about a newton or less."
+      />
       <NumberField
         name="leverArmMm"
         label="Lever arm from the shoulder"
@@ -36,9 +41,20 @@ export function PivotInputs() {
         name="bearingLengthMm"
         label="Bearing length"
         quantity="length"
-        hint="Leave empty to take 1.5 × the pivot diameter."
+        hint="The part of the pivot in the hole. Leave empty to take 1.5 × the pivot diameter."
       />
-      <NumberField name="allowableStressMPa" label="Allowable bending stress" quantity="stress" />
+      <NumberField
+        name="pivotLengthMm"
+        label="Pivot length, shoulder to end (optional)"
+        quantity="length"
+        hint="Checked against the usual 1.5–2 × its diameter."
+      />
+      <NumberField
+        name="allowableStressMPa"
+        label="Allowable bending stress"
+        quantity="stress"
+        hint="200 MPa is a cautious figure for hardened and tempered arbor steel (common practice, no source)."
+      />
       <ChoiceField
         name="friction"
         label="Friction coefficient"

@@ -8,12 +8,12 @@ export function PivotResults({ output }: { output: CalcOutput<PivotBurnishResult
     <ResultList>
       <ResultRow label="Bending stress at the shoulder" value={r.bendingStressMPa} quantity="stress" main />
       <ResultRow
-        label="Safety factor"
+        label="Safety factor on bending"
         value={r.safetyFactor}
         quantity="ratio"
         unit="×"
         significant={3}
-        note="Allowable stress over bending stress; below 1 the pivot may bend or snap."
+        note="Allowable stress ÷ working (bending) stress; below 1 the pivot may bend or snap."
       />
       <ResultRow label="Smallest safe diameter" value={r.minDiameterMm} quantity="length" />
       <ResultRow label="Projected bearing pressure" value={r.bearingPressureMPa} quantity="stress" />

@@ -1,7 +1,7 @@
 import { CartesianGrid, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { HardnessPoint } from '@shared/calc/spring-temper-tables';
 import { useCalcForm } from '../../components/calculator-context';
-import { formatNumber, toDisplay, unitLabel } from '../../lib/units';
+import { formatFixed, formatNumber, toDisplay, unitLabel } from '../../lib/units';
 
 const STEEL_NAME = { O1: 'O1', '1095': '1095', silver: 'Silver steel' } as const;
 
@@ -46,7 +46,7 @@ export default function HardnessPlot({
               label={{ value: 'HRC', angle: -90, position: 'insideLeft' }}
             />
             <Tooltip
-              formatter={(v) => [`${formatNumber(Number(v), 3)} HRC`, 'Hardness']}
+              formatter={(v) => [`${formatFixed(Number(v), 0)} HRC`, 'Hardness']}
               labelFormatter={(v) => `${formatNumber(Number(v), 4)} ${unit}`}
             />
             <Line

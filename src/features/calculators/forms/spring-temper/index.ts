@@ -10,9 +10,7 @@ function clickSpringMaterial(d: Draft) {
     return { youngsModulusGPa: num(d.youngsModulusGPa), yieldStrengthMPa: num(d.yieldStrengthMPa) };
   }
   const m = CLICK_SPRING_MATERIALS.find((x) => x.id === d.material);
-  return m
-    ? { youngsModulusGPa: m.youngsModulusGPa, yieldStrengthMPa: m.yieldStrengthMPa ?? undefined }
-    : { youngsModulusGPa: NaN };
+  return m ? { youngsModulusGPa: m.youngsModulusGPa, yieldStrengthMPa: m.yieldStrengthMPa } : { youngsModulusGPa: NaN };
 }
 
 function toInput(d: Draft): SpringTemperInput {
@@ -39,7 +37,8 @@ const text = (v: number | string | null | undefined) => (v === undefined || v ==
 
 export const springTemperForm = defineForm({
   calculator: springTemper,
-  // Click-spring starting values are TRADE.md §3d's first check row: b = 2, t = 0.3, L = 20, δ = 1 mm, E = 206 GPa.
+  // Click-spring starting values are TRADE.md §3d's first check row: b = 2, t = 0.3, L = 20, δ = 1 mm, E = 206 GPa,
+  // in hardened and tempered spring steel.
   initial: {
     mode: 'steel',
     steel: 'O1',
@@ -61,8 +60,7 @@ export const springTemperForm = defineForm({
     }
     if (input.mode === 'brass') return { mode: 'brass', numbersHard: String(input.numbersHard) };
     const m = CLICK_SPRING_MATERIALS.find(
-      (x) =>
-        x.youngsModulusGPa === input.youngsModulusGPa && (x.yieldStrengthMPa ?? undefined) === input.yieldStrengthMPa,
+      (x) => x.youngsModulusGPa === input.youngsModulusGPa && x.yieldStrengthMPa === input.yieldStrengthMPa,
     );
     return {
       mode: 'click-spring',

@@ -19,7 +19,10 @@ const STEELS = [
 ];
 
 const MATERIALS = [
-  ...CLICK_SPRING_MATERIALS.map((m) => ({ value: m.id, label: `${m.label} (E ${m.youngsModulusGPa} GPa)` })),
+  ...CLICK_SPRING_MATERIALS.map((m) => ({
+    value: m.id,
+    label: `${m.label} (E ${m.youngsModulusGPa} GPa, elastic limit ${m.yieldStrengthMPa} MPa)`,
+  })),
   { value: TYPED_MATERIAL, label: 'My own figures' },
 ];
 
@@ -68,9 +71,9 @@ function ClickSpringInputs() {
           <NumberField name="youngsModulusGPa" label="Young’s modulus" quantity="modulus" />
           <NumberField
             name="yieldStrengthMPa"
-            label="Yield strength"
+            label="Elastic limit (yield strength)"
             quantity="stress"
-            hint="Optional: checks the stress against it."
+            hint="The stress is judged against it; without it only impossible stresses are caught."
           />
         </div>
       )}

@@ -1,5 +1,6 @@
 import { lazy, Suspense } from 'react';
 import type { z } from 'zod';
+import { WORKING_SHARE } from '@shared/calc/click-spring';
 import type { SpringTemperInput, SpringTemperResults } from '@shared/calc/spring-temper';
 import type { CalcOutput } from '@shared/calc/types';
 import { Loading } from '@/components/ui/states';
@@ -27,7 +28,7 @@ function SteelResults({ r, tempC }: { r: Of<'steel'>; tempC: number | undefined 
         </ResultLine>
         <ResultLine label="Quench in">{h.quench}</ResultLine>
         {h.asQuenchedHrc !== null && (
-          <ResultRow label="Hardness as quenched" value={h.asQuenchedHrc} quantity="count" unit="HRC" />
+          <ResultRow label="Hardness as quenched" value={h.asQuenchedHrc} quantity="count" unit="HRC" decimals={0} />
         )}
         {r.colourForTemperature && (
           <ResultLine label="Temper colour at that heat" main>
@@ -40,9 +41,18 @@ function SteelResults({ r, tempC }: { r: Of<'steel'>; tempC: number | undefined 
             value={r.hardnessAtTemperatureHrc}
             quantity="count"
             unit="HRC"
-            significant={3}
-            note="Read off a straight line between the table’s points."
+            decimals={0}
+            note="Read off a straight line between the table’s points, to the whole HRC a hardness test reads."
           />
+        )}
+        {r.springTemper && (
+          <ResultLine
+            label="Temper for a flat spring (about 44–50 HRC)"
+            note={`${r.springTemper.source}. Use a thermometer or oven: no temper colour shows this heat.`}
+          >
+            {temp(r.springTemper.temperatureC.min)} to {temp(r.springTemper.temperatureC.max)}, {r.springTemper.hrc.max}
+            –{r.springTemper.hrc.min} HRC
+          </ResultLine>
         )}
         {r.temperatureForColour && (
           <ResultRow
@@ -106,19 +116,39 @@ function BrassResults({ r }: { r: Of<'brass'> }) {
 }
 
 function ClickSpringResults({ r }: { r: Of<'click-spring'> }) {
+  const { unitSystem } = useCalcForm();
   return (
     <ResultList>
-      <ResultRow label="Force at the tip" value={r.forceN} quantity="force" main />
-      <ResultRow label="Root stress" value={r.stressMPa} quantity="stress" />
+      {r.forceN === null ? (
+        <ResultLine label="Force at the tip" main note="Past the elastic limit the spring sets or breaks first.">
+          not reached
+        </ResultLine>
+      ) : (
+        <ResultRow label="Force at the tip" value={r.forceN} quantity="force" main />
+      )}
+      <ResultRow
+        label={r.forceN === null ? 'Root stress, by the elastic formula' : 'Root stress'}
+        value={r.stressMPa}
+        quantity="stress"
+      />
       <ResultRow label="Stiffness" value={r.stiffnessNPerMm} quantity="force" unit="N/mm" />
       {r.stressToYield !== null && (
         <ResultRow
-          label="Share of the yield strength used"
+          label="Share of the elastic limit used"
           value={r.stressToYield * 100}
           quantity="ratio"
           unit="%"
           significant={3}
+          note={`Keep a click spring under ${WORKING_SHARE * 100} %: it flexes at every click.`}
         />
+      )}
+      {r.deflectionAtWorkingShareMm !== null && (
+        <ResultLine label={`Deflection at ${WORKING_SHARE * 100} % of the elastic limit`}>
+          {withUnit(
+            formatNumber(toDisplay(r.deflectionAtWorkingShareMm, 'length', unitSystem)),
+            unitLabel('length', unitSystem),
+          )}
+        </ResultLine>
       )}
     </ResultList>
   );

@@ -22,7 +22,7 @@ export function TrainResults({
           label="Theoretical pendulum length"
           value={r.pendulumLengthMm}
           quantity="length"
-          significant={6}
+          decimals={1}
           main
           note={`Simple pendulum at ${input.gravity} m/s², from the suspension point to the centre of oscillation.`}
         />
@@ -32,7 +32,7 @@ export function TrainResults({
               label="Your pendulum's equivalent simple length"
               value={r.equivalentLengthMm}
               quantity="length"
-              significant={6}
+              decimals={1}
             />
             <ResultRow label="Your pendulum's full period" value={r.physicalPeriodS} quantity="time" significant={6} />
           </>

@@ -1,7 +1,7 @@
 import { lengthForBeats, type TrainPendulumResults } from '@shared/calc/train-pendulum';
 import { Button } from '@/components/ui/button';
 import { useCalcForm } from '../../components/calculator-context';
-import { formatNumber, toDisplay, unitLabel, withUnit } from '../../lib/units';
+import { decimalsIn, formatFixed, formatNumber, toDisplay, unitLabel, withUnit } from '../../lib/units';
 import { joinCells } from './train-cells';
 
 type Suggestion = NonNullable<TrainPendulumResults['suggestions']>[number];
@@ -12,7 +12,8 @@ export function TrainSuggestions({ suggestions, gravity }: { suggestions: Sugges
   if (suggestions.length === 0) return null;
   const length = (bph: number) =>
     withUnit(
-      formatNumber(toDisplay(lengthForBeats(bph, gravity), 'length', unitSystem), 5),
+      // To 0.1 mm, as a pendulum is measured.
+      formatFixed(toDisplay(lengthForBeats(bph, gravity), 'length', unitSystem), decimalsIn('length', unitSystem, 1)),
       unitLabel('length', unitSystem),
     );
   return (

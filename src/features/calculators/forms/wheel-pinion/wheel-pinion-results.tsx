@@ -56,27 +56,37 @@ export function WheelPinionResultsView({
           label="Wheel addendum"
           value={r.wheelAddendumMm}
           quantity="length"
-          note="1.38 m, half the blank allowance of the rule above."
+          note="1.38 m, half the blank allowance of the rule above: from a forum post, not a published standard."
         />
         <ResultRow
           label={lantern ? 'Trundle half-diameter above the pitch circle' : 'Pinion addendum'}
           value={r.pinionAddendumMm}
           quantity="length"
         />
-        <ResultRow
-          label="Goodrich's wheel addendum, for comparison"
-          value={r.goodrichWheelAddendumMm}
-          quantity="length"
-          note="7/20 of the pinion pitch radius, stated for an 8-leaf pinion: W. L. Goodrich, The Modern Clock (1905)."
-        />
+        {r.goodrichWheelAddendumMm !== null && (
+          <ResultRow
+            label="Goodrich's wheel addendum, for comparison"
+            value={r.goodrichWheelAddendumMm}
+            quantity="length"
+            note="7/20 of the pinion pitch radius, stated for the 8-leaf pinion: W. L. Goodrich, The Modern Clock (1905). For other counts the forum rule above governs."
+          />
+        )}
         <ResultRow label="Circular pitch" value={r.circularPitchMm} quantity="length" />
         <ResultRow label="Tooth space at the pitch circle" value={r.toothSpaceMm} quantity="length" />
         {lantern && (
-          <ResultLine label="Trundle in the tooth space">
-            <span className={r.trundleFits ? 'text-ink' : 'font-semibold text-error'}>
-              {r.trundleFits ? 'fits' : 'does not fit'}
-            </span>
-          </ResultLine>
+          <>
+            <ResultRow
+              label="Play of a tooth between the trundles"
+              value={r.trundleBacklashMm}
+              quantity="length"
+              note="Tooth space less the trundle; at least a tenth of the tooth space is asked for (common practice, no source)."
+            />
+            <ResultLine label="Trundle in the tooth space">
+              <span className={r.trundleFits ? 'text-ink' : 'font-semibold text-error'}>
+                {r.trundleFits ? 'fits' : (r.trundleBacklashMm ?? 0) > 0 ? 'too tight' : 'does not fit'}
+              </span>
+            </ResultLine>
+          </>
         )}
       </ResultList>
       <p className="mt-3 text-sm text-muted">
