@@ -1,7 +1,6 @@
 import path from 'node:path';
 import express from 'express';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config/env';
 import { accountRouter } from './features/auth/account.router';
@@ -24,7 +23,7 @@ import { reviewsRouter } from './features/reviews/reviews.router';
 import { submissionsRouter } from './features/submissions/submissions.router';
 import { uploadsRouter } from './features/uploads/uploads.router';
 import { apiNotFound, errorHandler } from './lib/error-handler';
-import type { Logger } from './lib/logger';
+import { httpLogger, type Logger } from './lib/logger';
 import type { Mailer } from './lib/mailer';
 
 export interface AppDeps {
@@ -44,7 +43,7 @@ export function createApp(deps: AppDeps) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(httpLogger(logger));
   app.use(
     helmet({
       contentSecurityPolicy: {
