@@ -2,7 +2,7 @@ import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import type { UploadDTO } from '@shared/schemas/upload';
 import type { UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
-import { canSeeApprentice } from '../classes/access';
+import { canSeeUpload } from '../classes/access';
 import { processImage } from './image-pipeline';
 import { newFileKey, removeUploadFiles, writeUploadFiles } from './upload-files';
 import { Upload } from './upload.model';
@@ -62,10 +62,10 @@ export async function assertOwnUploads(userId: number, ids: number[], options: {
   await Upload.update({ claimedAt: new Date() }, { where: { id: { [Op.in]: unique }, claimedAt: null }, transaction });
 }
 
-/** The owner, the mentors of the owner's classes and the admin may see a photo; anyone else is told it does not exist. */
+/** Who may see a photo is decided in access.ts; anyone else is told it does not exist. */
 export async function findViewableUpload(viewer: UserDTO, id: number): Promise<Upload> {
   const upload = id > 0 ? await Upload.findByPk(id) : null;
-  if (!upload || !(viewer.id === upload.ownerId || (await canSeeApprentice(viewer, upload.ownerId)))) {
+  if (!upload || !(await canSeeUpload(viewer, upload))) {
     throw AppError.notFound('That photo');
   }
   return upload;
