@@ -8,7 +8,7 @@ import { parseBody } from '../../lib/validate';
 import { requireAuth, currentUser } from './guards';
 import { startSignedInSession } from './session';
 import { findOpenReset, requestPasswordReset, resetLinkGone, resetPassword } from './password-reset.service';
-import { signInLimits } from './sign-in-limits';
+import { resetRequestLimits, signInLimits } from './auth-limits';
 
 const RESET_REQUESTED = {
   message:
@@ -39,7 +39,7 @@ export function authRouter(deps: { mailer: Mailer; appUrl: string }) {
     res.status(204).end();
   });
 
-  router.post('/password-reset', async (req, res) => {
+  router.post('/password-reset', ...resetRequestLimits(), async (req, res) => {
     const { email } = parseBody(PasswordResetRequest, req);
     // Answered before the lookup and the e-mail, so that neither the reply nor its timing tells whether the
     // address has an account. A failure afterwards still reaches the error handler, which logs it.

@@ -15,12 +15,18 @@ export const resetLinkGone = () =>
     410,
   );
 
-/** Does nothing visible for an unknown or deactivated address: the caller answers the same either way. */
+/**
+ * Does nothing visible for an unknown or deactivated address: the caller answers the same either way. A new link
+ * replaces any open one, so an account never has more than one reset link that works.
+ */
 export async function requestPasswordReset(email: string, mailer: Mailer, appUrl: string): Promise<void> {
   const user = await User.findOne({ where: { email } });
   if (!user?.active) return;
   const { token, tokenHash, expiresAt } = newLinkToken(VALID_FOR_MS);
-  await PasswordReset.create({ userId: user.id, tokenHash, expiresAt, usedAt: null });
+  await PasswordReset.sequelize!.transaction(async (transaction) => {
+    await PasswordReset.destroy({ where: { userId: user.id, usedAt: null }, transaction });
+    await PasswordReset.create({ userId: user.id, tokenHash, expiresAt, usedAt: null }, { transaction });
+  });
   await mailer.send({
     to: user.email,
     subject: 'Set a new Tickwright password',
