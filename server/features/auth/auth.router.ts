@@ -7,7 +7,13 @@ import type { Mailer } from '../../lib/mailer';
 import { parseBody } from '../../lib/validate';
 import { requireAuth, currentUser } from './guards';
 import { startSignedInSession } from './session';
-import { findOpenReset, requestPasswordReset, resetLinkGone, resetPassword } from './password-reset.service';
+import {
+  findOpenReset,
+  requestPasswordReset,
+  resetLinkGone,
+  resetPassword,
+  spendOpenResets,
+} from './password-reset.service';
 import { resetRequestLimits, signInLimits } from './auth-limits';
 
 const RESET_REQUESTED = {
@@ -24,6 +30,7 @@ export function authRouter(deps: { mailer: Mailer; appUrl: string }) {
     req.body = input;
     const user = await authenticate(req);
     if (!user) throw new AppError('BAD_CREDENTIALS', 'That e-mail and password do not match an active account.', 401);
+    await spendOpenResets(user.id);
     await startSignedInSession(req, user);
     res.json({ user });
   });
