@@ -24,6 +24,7 @@ import { submissionsRouter } from './features/submissions/submissions.router';
 import { uploadsRouter } from './features/uploads/uploads.router';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import { httpLogger, type Logger } from './lib/logger';
+import { rejectBadAddress, rejectBadBody } from './lib/text-guard';
 import type { Mailer } from './lib/mailer';
 
 export interface AppDeps {
@@ -44,6 +45,7 @@ export function createApp(deps: AppDeps) {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.use(httpLogger(logger));
+  app.use(rejectBadAddress);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -66,6 +68,7 @@ export function createApp(deps: AppDeps) {
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
+  api.use(rejectBadBody);
   api.use('/health', healthRouter(sequelize));
   api.use(sessionMiddleware(sequelize, config).handlers);
   api.use(originCheck(config.appUrl));
