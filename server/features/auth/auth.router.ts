@@ -15,6 +15,7 @@ import {
   spendOpenResets,
 } from './password-reset.service';
 import { resetRequestLimits, signInLimits } from './auth-limits';
+import { requireHttpsForSignIn } from './secure-sign-in';
 
 const RESET_REQUESTED = {
   message:
@@ -25,7 +26,7 @@ const ResetToken = z.string().min(1).max(200);
 export function authRouter(deps: { mailer: Mailer; appUrl: string }) {
   const router = Router();
 
-  router.post('/login', ...signInLimits(), async (req, res) => {
+  router.post('/login', requireHttpsForSignIn(deps.appUrl), ...signInLimits(), async (req, res) => {
     const input = parseBody(LoginInput, req);
     req.body = input;
     const user = await authenticate(req);
