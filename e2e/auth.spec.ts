@@ -28,6 +28,21 @@ test('when the three demo people sign in, then each reaches their own account pa
   }
 });
 
+test('when an apprentice opens their account, then the room their photos take is shown against the quota', async ({
+  page,
+}) => {
+  await signIn(page, demo.ned);
+  await openAccount(page);
+  await expect(page.getByRole('heading', { name: 'Photo storage' })).toBeVisible();
+  await expect(page.getByText(/^\d+(\.\d)? MB of 500 MB used$/)).toBeVisible();
+  await expect(page.getByRole('progressbar', { name: 'Photo storage used' })).toBeVisible();
+  await signOut(page);
+  await signIn(page, demo.odile);
+  await openAccount(page);
+  await expect(page.getByRole('heading', { name: 'Photo storage' })).toHaveCount(0);
+  await signOut(page);
+});
+
 test('when the admin asks where development mail goes, then the fake mail service inbox is named', async ({ page }) => {
   await signIn(page, demo.admin);
   const reply = await page.request.get('/api/dev-mail');

@@ -1,7 +1,6 @@
 import path from 'node:path';
 import express from 'express';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config/env';
 import { accountRouter } from './features/auth/account.router';
@@ -24,7 +23,8 @@ import { reviewsRouter } from './features/reviews/reviews.router';
 import { submissionsRouter } from './features/submissions/submissions.router';
 import { uploadsRouter } from './features/uploads/uploads.router';
 import { apiNotFound, errorHandler } from './lib/error-handler';
-import type { Logger } from './lib/logger';
+import { httpLogger, type Logger } from './lib/logger';
+import { rejectBadAddress, rejectBadBody } from './lib/text-guard';
 import type { Mailer } from './lib/mailer';
 
 export interface AppDeps {
@@ -44,7 +44,8 @@ export function createApp(deps: AppDeps) {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(httpLogger(logger));
+  app.use(rejectBadAddress);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -67,6 +68,7 @@ export function createApp(deps: AppDeps) {
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
+  api.use(rejectBadBody);
   api.use('/health', healthRouter(sequelize));
   api.use(sessionMiddleware(sequelize, config).handlers);
   api.use(originCheck(config.appUrl));

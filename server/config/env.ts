@@ -20,6 +20,11 @@ const EnvSchema = z.object({
   DEV_SMTP_PORT: port.default(1025),
   DEV_MAIL_WEB_PORT: port.default(1080),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  UPLOAD_QUOTA_MB: z.coerce
+    .number({ error: 'must be a whole number of megabytes' })
+    .int('must be a whole number of megabytes')
+    .min(1, 'must be at least 1 (megabyte)')
+    .default(500),
 });
 
 export interface Config {
@@ -35,6 +40,8 @@ export interface Config {
   devSmtpPort: number;
   devMailWebPort: number;
   logLevel: string;
+  /** How much photo storage each person may fill (all stored sizes counted), in bytes. */
+  uploadQuotaBytes: number;
 }
 
 export class ConfigError extends Error {}
@@ -61,6 +68,7 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
     devSmtpPort: env.DEV_SMTP_PORT,
     devMailWebPort: env.DEV_MAIL_WEB_PORT,
     logLevel: env.LOG_LEVEL,
+    uploadQuotaBytes: env.UPLOAD_QUOTA_MB * 1024 * 1024,
   };
 }
 

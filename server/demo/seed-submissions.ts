@@ -201,7 +201,7 @@ export async function seedSubmissions(sequelize: Sequelize): Promise<void> {
     for (const [i, v] of piece.versions.entries()) {
       const uploads: UploadDTO[] = [];
       for (const [kind, variant] of v.photos)
-        uploads.push(await storeUpload(dataDir, apprentice.id, await demoPhoto(kind, variant)));
+        uploads.push(await storeUpload(dataDir, apprentice.id, await demoPhoto(kind, variant), null));
       await assertOwnUploads(
         apprentice.id,
         uploads.map((u) => u.id),

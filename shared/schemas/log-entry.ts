@@ -29,10 +29,18 @@ function isCalendarDate(s: string): boolean {
   return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
 }
 
+/** No bench log reaches back before 1900 or forward past next year: a date outside that is a slip of the keyboard. */
+export const EARLIEST_LOG_YEAR = 1900;
+const latestLogYear = () => new Date().getFullYear() + 1;
+// NaN (a malformed date, already refused by the pattern) compares false, so these add no second message for it.
+const yearOf = (d: string) => Number(d.slice(0, 4));
+
 export const LogDate = z
   .string()
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2026-10-05.')
-  .refine(isCalendarDate, 'That date is not on the calendar.');
+  .refine(isCalendarDate, 'That date is not on the calendar.')
+  .refine((d) => !(yearOf(d) < EARLIEST_LOG_YEAR), `Use a date from ${EARLIEST_LOG_YEAR} on.`)
+  .refine((d) => !(yearOf(d) > latestLogYear()), 'Use a date no later than next year.');
 
 /**
  * "Not in the future" is judged by the clock of the code that parses: on the server that is the server's local time

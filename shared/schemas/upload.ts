@@ -19,3 +19,7 @@ export const UploadDTO = z.object({
 export type UploadDTO = z.infer<typeof UploadDTO>;
 
 export const UploadSizeQuery = z.object({ size: UploadSize.default('full') });
+
+/** How much of a person's photo storage is filled, all stored sizes counted. */
+export const StorageUsage = z.object({ usedBytes: z.number().int().min(0), quotaBytes: z.number().int().positive() });
+export type StorageUsage = z.infer<typeof StorageUsage>;

@@ -65,7 +65,9 @@ describe('access to the sign-in, account and users routes, role by role', () => 
   for (const route of ROUTES) {
     for (const who of ['anonymous', 'apprentice', 'mentor', 'admin'] as const) {
       it(`when ${who} calls ${route.method.toUpperCase()} ${route.url}, then it answers ${route.expect[who]}`, async () => {
-        const res = await agents[who][route.method](route.url).send(route.body);
+        // A different address for each caller: one address may ask for a reset link only a few times an hour.
+        const body = route.body && 'email' in route.body ? { email: `nobody-${who}@example.test` } : route.body;
+        const res = await agents[who][route.method](route.url).send(body);
         expect(res.status).toBe(route.expect[who]);
         if (res.status === 401) expect(res.body.error.code).toBe('UNAUTHENTICATED');
         if (res.status === 403) expect(res.body.error.code).toBe('FORBIDDEN');
@@ -114,7 +116,7 @@ describe('cross-origin refusal', () => {
     const res = await request(t.app)
       .post('/api/auth/password-reset')
       .set('Referer', `${ORIGIN}/forgot-password`)
-      .send({ email: 'nobody@example.test' });
+      .send({ email: 'nobody-else@example.test' });
     expect(res.status).toBe(202);
   });
 });

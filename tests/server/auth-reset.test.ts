@@ -130,6 +130,33 @@ describe('password reset by e-mail', () => {
     );
   });
 
+  it('when the password is changed on the account page, then an open reset link answers 410', async () => {
+    const { agent, user } = await t.signIn('apprentice');
+    const token = await requestLink(user.email);
+    const changed = await agent
+      .post('/api/account/password')
+      .send({ currentPassword: TEST_PASSWORD, newPassword: NEW_PASSWORD });
+    expect(changed.status).toBe(204);
+    expect((await t.anon().get(`/api/auth/password-reset/${token}`)).status).toBe(410);
+    const used = await t.anon().post(`/api/auth/password-reset/${token}`).send({ password: 'taken-over-pw-1' });
+    expect(used.status).toBe(410);
+    expect(await PasswordReset.count({ where: { userId: user.id, usedAt: null } })).toBe(0);
+    expect((await signInWith(user.email, NEW_PASSWORD)).status).toBe(200);
+  });
+
+  it('when the person signs in with their password after a reset was asked, then the open link is spent', async () => {
+    const user = await t.createUser('mentor');
+    const token = await requestLink(user.email);
+    expect((await signInWith(user.email, 'not-my-password')).status).toBe(401);
+    expect((await t.anon().get(`/api/auth/password-reset/${token}`)).status).toBe(204);
+    expect((await signInWith(user.email, TEST_PASSWORD)).status).toBe(200);
+    expect((await t.anon().get(`/api/auth/password-reset/${token}`)).status).toBe(410);
+    expect((await t.anon().post(`/api/auth/password-reset/${token}`).send({ password: NEW_PASSWORD })).status).toBe(
+      410,
+    );
+    expect((await PasswordReset.findOne({ where: { userId: user.id } }))!.usedAt).toBeInstanceOf(Date);
+  });
+
   it('when the request has no valid e-mail, then it answers 400 with a field error', async () => {
     const res = await t.anon().post('/api/auth/password-reset').send({ email: 'not an address' });
     expect(res.status).toBe(400);

@@ -315,6 +315,24 @@ describe('export and summary', () => {
     expect(data[0].Title).toBe(`'=HYPERLINK("x")`);
   });
 
+  it('when a cell holds a formula on a later line, then every such line of every cell is defused', async () => {
+    const a = await freshApprentice();
+    await addEntry(a.agent, {
+      title: '=1+\n1',
+      notes: 'Pivots fine.\n=HYPERLINK("http://example.test/x","open")\n+2\r\n-3\r@SUM(A1)\n\tindented',
+      measurements: [{ name: 'end shake', value: -0.02, unit: 'mm' }],
+    });
+    const res = await a.agent.get('/api/log-entries/export.csv');
+    const { data } = Papa.parse<Record<string, string>>(res.text.replace(/^\uFEFF/, ''), { header: true });
+    expect(data[0].Title).toBe("'=1+\n1");
+    expect(data[0].Notes).toBe(
+      "Pivots fine.\n'=HYPERLINK(\"http://example.test/x\",\"open\")\n'+2\r\n'-3\r'@SUM(A1)\n'\tindented",
+    );
+    expect(data[0].Measurements).toBe('end shake -0.02 mm');
+    const risky = /(^|[\r\n])[=+\-@\t\r]/;
+    for (const cell of Object.values(data[0])) expect(cell).not.toMatch(risky);
+  });
+
   it('when the summary is asked, then this week, eight weeks of hours and totals per course add up', async () => {
     const a = await freshApprentice();
     const lesson = await Lesson.findOne({ order: [['id', 'ASC']] });

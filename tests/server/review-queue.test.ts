@@ -119,9 +119,11 @@ describe('review queue', () => {
     await Submission.update({ status: 'passed' }, { where: { id: subs.map((s) => s.id) } });
   });
 
-  it('when counted for the navigation, then the mentor gets their number; a withdrawn apprentice’s piece still counts', async () => {
+  it('when counted for the navigation, then the mentor gets their number; a withdrawn apprentice’s piece leaves it', async () => {
     expect((await cls.mentor.agent.get('/api/review-queue/count')).body).toEqual({ count: 3 });
     await Enrolment.update({ status: 'withdrawn' }, { where: { userId: cls.apprentices[0].user.id } });
+    expect((await cls.mentor.agent.get('/api/review-queue/count')).body).toEqual({ count: 2 });
+    await Enrolment.update({ status: 'active' }, { where: { userId: cls.apprentices[0].user.id } });
     expect((await cls.mentor.agent.get('/api/review-queue/count')).body).toEqual({ count: 3 });
     expect((await (await t.signIn('mentor')).agent.get('/api/review-queue/count')).body).toEqual({ count: 0 });
   });

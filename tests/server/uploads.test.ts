@@ -4,7 +4,7 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Upload } from '../../server/features/uploads/upload.model';
 import { assertOwnUploads, sweepAbandonedUploads } from '../../server/features/uploads/uploads.service';
-import { makeClass, makeJpeg, uploadPhoto } from './support/pieces';
+import { firstProject, makeClass, makeJpeg, sentPiece, uploadPhoto } from './support/pieces';
 import { createTestApp, type TestApp } from './support/test-app';
 
 let t: TestApp;
@@ -126,23 +126,29 @@ describe('uploads', () => {
   });
 
   it('when someone other than the owner asks, then only the class mentor and the admin see it; others get 404', async () => {
-    const { mentor, apprentices } = await makeClass(t);
+    const { mentor, apprentices, course } = await makeClass(t);
     const owner = apprentices[0].agent;
-    const up = await uploadPhoto(owner, await makeJpeg());
+    const loose = await uploadPhoto(owner, await makeJpeg());
+    const piece = await sentPiece(owner, (await firstProject(course.slug)).id);
+    const url = `/api/uploads/${piece.uploadIds[0]}`;
+    const up = { url, thumbUrl: `${url}?size=thumb`, viewUrl: `${url}?size=view` };
+    // A photo not yet sent in a piece (or kept in the bench log) is the apprentice's alone.
+    expect((await mentor.agent.get(loose.body.url)).status).toBe(404);
+    expect((await owner.get(loose.body.url)).status).toBe(200);
     const otherApprentice = (await t.signIn('apprentice')).agent;
     const otherMentor = (await t.signIn('mentor')).agent;
     const admin = (await t.signIn('admin')).agent;
-    expect((await owner.get(up.body.url)).status).toBe(200);
-    expect((await mentor.agent.get(up.body.thumbUrl)).status).toBe(200);
-    expect((await admin.get(up.body.viewUrl)).status).toBe(200);
-    const refused = await otherApprentice.get(up.body.url);
+    expect((await owner.get(up.url)).status).toBe(200);
+    expect((await mentor.agent.get(up.thumbUrl)).status).toBe(200);
+    expect((await admin.get(up.viewUrl)).status).toBe(200);
+    const refused = await otherApprentice.get(up.url);
     expect(refused.status).toBe(404);
     expect(refused.body.error.code).toBe('NOT_FOUND');
-    expect((await otherMentor.get(up.body.url)).status).toBe(404);
-    expect((await t.anon().get(up.body.url)).status).toBe(401);
+    expect((await otherMentor.get(up.url)).status).toBe(404);
+    expect((await t.anon().get(up.url)).status).toBe(401);
     expect((await owner.get('/api/uploads/999999')).status).toBe(404);
     expect((await owner.get('/api/uploads/abc')).status).toBe(404);
-    expect((await owner.get(`${up.body.url}?size=huge`)).status).toBe(400);
+    expect((await owner.get(`${up.url}?size=huge`)).status).toBe(400);
   });
 
   it('when a mentor or the admin tries to upload, or nobody is signed in, then it is refused', async () => {

@@ -1,6 +1,7 @@
 import type { AccountUpdateInput, PasswordChangeInput, UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
 import { endSessions } from './auth.service';
+import { spendOpenResets } from './password-reset.service';
 import { checkPassword, hashPassword } from './passwords';
 import { toUserDTO } from './user.mapper';
 import { User } from './user.model';
@@ -17,7 +18,7 @@ export async function updateAccount(userId: number, input: AccountUpdateInput): 
   return toUserDTO(user);
 }
 
-/** Checks the current password first, then signs out every other session of the account. */
+/** Checks the current password first, then signs out every other session of the account and spends its reset links. */
 export async function changePassword(userId: number, input: PasswordChangeInput, keepSessionId: string): Promise<void> {
   const user = await activeUser(userId);
   if (!(await checkPassword(input.currentPassword, user.passwordHash))) {
@@ -26,5 +27,6 @@ export async function changePassword(userId: number, input: PasswordChangeInput,
     });
   }
   await user.update({ passwordHash: await hashPassword(input.newPassword) });
+  await spendOpenResets(user.id);
   await endSessions(user.id, keepSessionId);
 }

@@ -7,8 +7,15 @@ import type { Mailer } from '../../lib/mailer';
 import { parseBody } from '../../lib/validate';
 import { requireAuth, currentUser } from './guards';
 import { startSignedInSession } from './session';
-import { findOpenReset, requestPasswordReset, resetLinkGone, resetPassword } from './password-reset.service';
-import { signInLimits } from './sign-in-limits';
+import {
+  findOpenReset,
+  requestPasswordReset,
+  resetLinkGone,
+  resetPassword,
+  spendOpenResets,
+} from './password-reset.service';
+import { resetRequestLimits, signInLimits } from './auth-limits';
+import { requireHttpsForSignIn } from './secure-sign-in';
 
 const RESET_REQUESTED = {
   message:
@@ -19,11 +26,12 @@ const ResetToken = z.string().min(1).max(200);
 export function authRouter(deps: { mailer: Mailer; appUrl: string }) {
   const router = Router();
 
-  router.post('/login', ...signInLimits(), async (req, res) => {
+  router.post('/login', requireHttpsForSignIn(deps.appUrl), ...signInLimits(), async (req, res) => {
     const input = parseBody(LoginInput, req);
     req.body = input;
     const user = await authenticate(req);
     if (!user) throw new AppError('BAD_CREDENTIALS', 'That e-mail and password do not match an active account.', 401);
+    await spendOpenResets(user.id);
     await startSignedInSession(req, user);
     res.json({ user });
   });
@@ -39,7 +47,7 @@ export function authRouter(deps: { mailer: Mailer; appUrl: string }) {
     res.status(204).end();
   });
 
-  router.post('/password-reset', async (req, res) => {
+  router.post('/password-reset', ...resetRequestLimits(), async (req, res) => {
     const { email } = parseBody(PasswordResetRequest, req);
     // Answered before the lookup and the e-mail, so that neither the reply nor its timing tells whether the
     // address has an account. A failure afterwards still reaches the error handler, which logs it.

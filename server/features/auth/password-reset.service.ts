@@ -1,3 +1,4 @@
+import type { Transaction } from 'sequelize';
 import { AppError } from '../../lib/app-error';
 import { hashLinkToken, newLinkToken } from '../../lib/link-token';
 import type { Mailer } from '../../lib/mailer';
@@ -15,12 +16,18 @@ export const resetLinkGone = () =>
     410,
   );
 
-/** Does nothing visible for an unknown or deactivated address: the caller answers the same either way. */
+/**
+ * Does nothing visible for an unknown or deactivated address: the caller answers the same either way. A new link
+ * replaces any open one, so an account never has more than one reset link that works.
+ */
 export async function requestPasswordReset(email: string, mailer: Mailer, appUrl: string): Promise<void> {
   const user = await User.findOne({ where: { email } });
   if (!user?.active) return;
   const { token, tokenHash, expiresAt } = newLinkToken(VALID_FOR_MS);
-  await PasswordReset.create({ userId: user.id, tokenHash, expiresAt, usedAt: null });
+  await PasswordReset.sequelize!.transaction(async (transaction) => {
+    await PasswordReset.destroy({ where: { userId: user.id, usedAt: null }, transaction });
+    await PasswordReset.create({ userId: user.id, tokenHash, expiresAt, usedAt: null }, { transaction });
+  });
   await mailer.send({
     to: user.email,
     subject: 'Set a new Tickwright password',
@@ -36,6 +43,14 @@ export async function requestPasswordReset(email: string, mailer: Mailer, appUrl
       'Tickwright',
     ].join('\n'),
   });
+}
+
+/**
+ * Spends every open reset link of the account: once the person has shown they know their password (by signing in or
+ * changing it), a link still lying in their mailbox must not set another.
+ */
+export async function spendOpenResets(userId: number, transaction?: Transaction): Promise<void> {
+  await PasswordReset.update({ usedAt: new Date() }, { where: { userId, usedAt: null }, transaction });
 }
 
 /** The open reset and its user, or the 410 that a used, expired or unknown link answers. */
@@ -55,7 +70,7 @@ export async function resetPassword(token: string, password: string): Promise<vo
     // Claimed with a conditional update, so two requests racing with one link cannot both succeed.
     const [claimed] = await PasswordReset.update({ usedAt }, { where: { id: reset.id, usedAt: null }, transaction });
     if (claimed === 0) throw resetLinkGone();
-    await PasswordReset.update({ usedAt }, { where: { userId: user.id, usedAt: null }, transaction });
+    await spendOpenResets(user.id, transaction);
     await user.update({ passwordHash }, { transaction });
   });
   await endSessions(user.id);

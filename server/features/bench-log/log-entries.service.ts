@@ -1,4 +1,4 @@
-import { Op, type Sequelize, type Transaction, type WhereOptions } from 'sequelize';
+import { Op, literal, type Sequelize, type Transaction, type WhereOptions } from 'sequelize';
 import {
   formatMinutes,
   LOG_PAGE_SIZE,
@@ -14,7 +14,7 @@ import type { UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
 import { User } from '../auth/user.model';
 import { assertOwnCalculations } from '../calculations/calculations.service';
-import { assertCanSeeApprentice, canSeeApprentice } from '../classes/access';
+import { assertCanSeeApprentice, canSeeLogEntry, logEntryReachSql } from '../classes/access';
 import { Lesson } from '../courses/course.model';
 import { assertOwnUploads } from '../uploads/uploads.service';
 import { toEntryDTOs } from './log-entry.mapper';
@@ -23,13 +23,13 @@ import { LogComment, LogEntry, LogEntryCalculation, LogEntryUpload, LogGrade, Lo
 const WHAT = 'That log entry';
 
 /**
- * The entry when the viewer may read it (its apprentice, a mentor of their classes, the admin), else null. Access is
- * asked outside any transaction: access.ts does not take one, and the pool's single connection would wait on itself.
+ * The entry when the viewer may read it (access.ts decides), else null. Access is asked outside any transaction:
+ * access.ts does not take one, and the pool's single connection would wait on itself.
  */
 export async function readableEntry(viewer: UserDTO, id: number): Promise<LogEntry | null> {
   const row = id > 0 ? await LogEntry.findByPk(id) : null;
   if (!row) return null;
-  if (row.apprenticeId === viewer.id || (await canSeeApprentice(viewer, row.apprenticeId))) return row;
+  if (row.apprenticeId === viewer.id || (await canSeeLogEntry(viewer, row))) return row;
   return null;
 }
 
@@ -182,10 +182,12 @@ export async function logOwner(viewer: UserDTO, apprentice: number | undefined):
   return ownerId;
 }
 
-function filterWhere(apprenticeId: number, f: LogEntryFilters): WhereOptions<LogEntry> {
+/** The filters, narrowed to the entries in the viewer's reach (a mentor reads only their class's course's work). */
+function filterWhere(viewer: UserDTO, apprenticeId: number, f: LogEntryFilters): WhereOptions<LogEntry> {
   const date = { ...(f.from ? { [Op.gte]: f.from } : {}), ...(f.to ? { [Op.lte]: f.to } : {}) };
   return {
     apprenticeId,
+    [Op.and]: [literal(logEntryReachSql(viewer, 'LogEntry'))],
     ...(f.from || f.to ? { date } : {}),
     ...(f.lessonId ? { lessonId: f.lessonId } : {}),
   };
@@ -200,7 +202,7 @@ const NEWEST_FIRST: [string, string][] = [
 export async function listEntries(viewer: UserDTO, query: LogEntryListQuery): Promise<LogEntryList> {
   const apprenticeId = await logOwner(viewer, query.apprentice);
   const { rows, count } = await LogEntry.findAndCountAll({
-    where: filterWhere(apprenticeId, query),
+    where: filterWhere(viewer, apprenticeId, query),
     order: NEWEST_FIRST,
     limit: LOG_PAGE_SIZE,
     offset: (query.page - 1) * LOG_PAGE_SIZE,
@@ -212,6 +214,6 @@ export async function listEntries(viewer: UserDTO, query: LogEntryListQuery): Pr
 export async function allEntries(viewer: UserDTO, filters: LogEntryFilters) {
   const apprenticeId = await logOwner(viewer, filters.apprentice);
   const owner = await User.findByPk(apprenticeId, { attributes: ['name'] });
-  const rows = await LogEntry.findAll({ where: filterWhere(apprenticeId, filters), order: NEWEST_FIRST });
+  const rows = await LogEntry.findAll({ where: filterWhere(viewer, apprenticeId, filters), order: NEWEST_FIRST });
   return { apprenticeName: owner?.name ?? 'apprentice', entries: await toEntryDTOs(rows) };
 }

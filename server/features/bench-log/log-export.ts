@@ -1,6 +1,6 @@
-import Papa from 'papaparse';
 import { GRADE_ASPECTS, formatMinutes, type LogEntryDTO } from '@shared/schemas/log-entry';
 import { SCORE_WORDS } from '@shared/grading/score';
+import { toCsv } from '../../lib/csv';
 
 const COLUMNS = [
   'Date',
@@ -27,10 +27,7 @@ function gradeText(e: LogEntryDTO): string {
   return `${scores} (${g.mentor.name}, version ${g.entryVersion} of ${e.version})`;
 }
 
-/**
- * One row per entry. Cells that a spreadsheet would run as a formula (=, +, -, @ at the start) are quoted with a
- * leading apostrophe by papaparse, so an entry's text can never act inside the guild office's spreadsheet.
- */
+/** One row per entry; toCsv keeps an entry's text from acting as a formula in the spreadsheet that opens it. */
 export function entriesCsv(entries: LogEntryDTO[]): string {
   const data = entries.map((e) => [
     e.date,
@@ -46,8 +43,7 @@ export function entriesCsv(entries: LogEntryDTO[]): string {
     e.comments.map((c) => `${c.author.name}: ${c.body}`).join(' | '),
     gradeText(e),
   ]);
-  // The byte-order mark lets spreadsheet programs read µm and other non-ASCII units as UTF-8.
-  return '\uFEFF' + Papa.unparse({ fields: COLUMNS, data }, { escapeFormulae: true });
+  return toCsv(COLUMNS, data);
 }
 
 export function csvFileName(apprenticeName: string, today: string): string {

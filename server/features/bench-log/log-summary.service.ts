@@ -8,7 +8,7 @@ import {
 } from '@shared/schemas/log-entry';
 import type { UserDTO } from '@shared/schemas/user';
 import { User } from '../auth/user.model';
-import { visibleApprenticeIds } from '../classes/access';
+import { logEntryReachSql, visibleApprenticeIds } from '../classes/access';
 import { logOwner } from './log-entries.service';
 
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -31,7 +31,8 @@ export async function logSummary(sequelize: Sequelize, viewer: UserDTO, query: L
   const weekStarts = Array.from({ length: query.weeks }, (_, i) => addDays(thisMonday, -7 * (query.weeks - 1 - i)));
   const byWeek = new Map(weekStarts.map((w) => [w, 0]));
   const recent = await sequelize.query<{ date: string; minutes: number }>(
-    'SELECT date, minutes FROM log_entries WHERE apprenticeId = :apprenticeId AND date >= :from',
+    `SELECT e.date, e.minutes FROM log_entries e
+     WHERE e.apprenticeId = :apprenticeId AND e.date >= :from AND ${logEntryReachSql(viewer, 'e')}`,
     { replacements: { apprenticeId, from: weekStarts[0] }, type: QueryTypes.SELECT },
   );
   for (const r of recent) {
@@ -43,7 +44,7 @@ export async function logSummary(sequelize: Sequelize, viewer: UserDTO, query: L
      FROM log_entries e
      LEFT JOIN lessons l ON l.id = e.lessonId
      LEFT JOIN courses c ON c.id = l.courseId
-     WHERE e.apprenticeId = :apprenticeId
+     WHERE e.apprenticeId = :apprenticeId AND ${logEntryReachSql(viewer, 'e')}
      GROUP BY c.id
      ORDER BY minutes DESC`,
     { replacements: { apprenticeId }, type: QueryTypes.SELECT },
@@ -62,23 +63,13 @@ export async function logSummary(sequelize: Sequelize, viewer: UserDTO, query: L
   };
 }
 
-/** SQL condition on the apprentices a viewer may read; the admin reads everyone's. */
-async function visibleFilter(viewer: UserDTO): Promise<{ sql: string; ids: number[] } | null> {
-  const visible = await visibleApprenticeIds(viewer);
-  if (visible === 'all') return { sql: '1 = 1', ids: [] };
-  if (visible.length === 0) return null;
-  return { sql: 'e.apprenticeId IN (:ids)', ids: visible };
-}
-
 const TO_READ_LIMIT = 8;
 
 /** Entries that no mentor has graded yet, newest first: what a mentor's Today page asks them to read. */
 export async function entriesToRead(sequelize: Sequelize, viewer: UserDTO): Promise<LogEntriesToRead> {
-  const filter = await visibleFilter(viewer);
-  if (!filter) return { entries: [], total: 0 };
   const from = `FROM log_entries e JOIN users u ON u.id = e.apprenticeId
-     WHERE ${filter.sql} AND NOT EXISTS (SELECT 1 FROM log_grades g WHERE g.entryId = e.id)`;
-  const replacements = { ids: filter.ids, limit: TO_READ_LIMIT };
+     WHERE ${logEntryReachSql(viewer, 'e')} AND NOT EXISTS (SELECT 1 FROM log_grades g WHERE g.entryId = e.id)`;
+  const replacements = { limit: TO_READ_LIMIT };
   const rows = await sequelize.query<{
     id: number;
     apprenticeId: number;
@@ -119,7 +110,7 @@ export async function logApprentices(sequelize: Sequelize, viewer: UserDTO): Pro
   const counts = await sequelize.query<{ apprenticeId: number; entries: number; lastDate: string; ungraded: number }>(
     `SELECT e.apprenticeId, COUNT(*) AS entries, MAX(e.date) AS lastDate,
        SUM(CASE WHEN EXISTS (SELECT 1 FROM log_grades g WHERE g.entryId = e.id) THEN 0 ELSE 1 END) AS ungraded
-     FROM log_entries e WHERE e.apprenticeId IN (:ids) GROUP BY e.apprenticeId`,
+     FROM log_entries e WHERE e.apprenticeId IN (:ids) AND ${logEntryReachSql(viewer, 'e')} GROUP BY e.apprenticeId`,
     { replacements: { ids: people.map((p) => p.id).concat(0) }, type: QueryTypes.SELECT },
   );
   const byId = new Map(counts.map((c) => [Number(c.apprenticeId), c]));

@@ -14,6 +14,7 @@ import type { Logger } from '../../lib/logger';
 import type { Mailer } from '../../lib/mailer';
 import { idParam, parseBody, parseQuery } from '../../lib/validate';
 import { currentUser, requireRole } from '../auth/guards';
+import { requireHttpsForSignIn } from '../auth/secure-sign-in';
 import { startSignedInSession } from '../auth/session';
 import { acceptInvitation, previewInvitation } from './invitation-accept.service';
 import {
@@ -126,7 +127,7 @@ export function invitationsRouter(deps: InvitationDeps) {
     res.json(await previewInvitation(String(req.params.token)));
   });
 
-  router.post('/:token/accept', linkLimit, async (req, res) => {
+  router.post('/:token/accept', requireHttpsForSignIn(deps.config.appUrl), linkLimit, async (req, res) => {
     const input = parseBody(AcceptInvitationInput, req);
     const user = await acceptInvitation(String(req.params.token), input);
     await startSignedInSession(req, user);

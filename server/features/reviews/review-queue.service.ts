@@ -6,7 +6,7 @@ import {
   type ReviewQueueQuery,
 } from '@shared/schemas/review';
 import type { UserDTO } from '@shared/schemas/user';
-import { mentoredClassIds } from '../classes/access';
+import { mentoredClassIds, reachSql } from '../classes/access';
 import { uploadDTO } from '../uploads/uploads.service';
 
 /** Whitelisted ORDER BY columns; the request only ever picks a key of this map. */
@@ -16,6 +16,8 @@ interface Scope {
   where: string[];
   replacements: Record<string, unknown>;
   classIds: number[] | 'all';
+  /** The mentor's reach depends on each piece's course, so their queue always joins the lessons. */
+  byCourse: boolean;
 }
 
 /** The waiting submissions a viewer may review, narrowed by the filters; null when the viewer may see none. */
@@ -29,9 +31,8 @@ async function scope(
   if (viewer.role === 'apprentice') return null;
   if (classIds !== 'all') {
     if (classIds.length === 0) return null;
-    // visibleApprenticeIds (access.ts) as a subquery: a mentor of a class of two thousand would otherwise send as many ids.
-    where.push('s.apprenticeId IN (SELECT userId FROM enrolments WHERE classId IN (:classIds))');
-    replacements.classIds = classIds;
+    // The rule of access.ts as a condition: a mentor of a class of two thousand would otherwise send as many ids.
+    where.push(reachSql(viewer, 's.apprenticeId', 'l.courseId'));
   }
   if (q.classId) {
     if (classIds !== 'all' && !classIds.includes(q.classId)) return null;
@@ -47,13 +48,13 @@ async function scope(
     where.push('s.projectId = :projectId');
     replacements.projectId = q.projectId;
   }
-  return { where, replacements, classIds };
+  return { where, replacements, classIds, byCourse: classIds !== 'all' };
 }
 
 /** Only the tables a filter or the sort needs are joined: a plain count reads the submissions indexes alone. */
-function fromFor(q: Partial<Pick<ReviewQueueQuery, 'classId' | 'courseId' | 'sort'>>) {
+function fromFor(q: Partial<Pick<ReviewQueueQuery, 'classId' | 'courseId' | 'sort'>>, byCourse: boolean) {
   const joins = ['FROM submissions s'];
-  if (q.classId || q.courseId || q.sort === 'project') {
+  if (byCourse || q.classId || q.courseId || q.sort === 'project') {
     joins.push('JOIN projects p ON p.id = s.projectId JOIN lessons l ON l.id = p.lessonId');
   }
   if (q.sort === 'apprentice') joins.push('JOIN users u ON u.id = s.apprenticeId');
@@ -71,7 +72,7 @@ export async function reviewQueue(
   const where = s.where.join(' AND ');
   const dir = q.dir === 'desc' ? 'DESC' : 'ASC';
   const [{ total }] = await sequelize.query<{ total: number }>(
-    `SELECT COUNT(*) AS total ${fromFor({ ...q, sort: undefined })} WHERE ${where}`,
+    `SELECT COUNT(*) AS total ${fromFor({ ...q, sort: undefined }, s.byCourse)} WHERE ${where}`,
     {
       replacements: s.replacements,
       type: QueryTypes.SELECT,
@@ -88,7 +89,7 @@ export async function reviewQueue(
               WHERE e.userId = pg.apprenticeId AND g.courseId = c.id ${classFilter}
               ORDER BY e.status = 'active' DESC, g.startsOn DESC LIMIT 1) AS className
      FROM (SELECT s.id, s.apprenticeId, s.projectId, s.currentVersion, s.sentAt, ${SORT_COLUMN[q.sort]} AS sortKey
-           ${fromFor(q)} WHERE ${where}
+           ${fromFor(q, s.byCourse)} WHERE ${where}
            ORDER BY ${SORT_COLUMN[q.sort]} ${dir}, s.sentAt ASC, s.id ${dir}
            LIMIT :limit OFFSET :offset) pg
      JOIN users u ON u.id = pg.apprenticeId
@@ -130,7 +131,7 @@ export async function queueCount(sequelize: Sequelize, viewer: UserDTO): Promise
   const s = await scope(viewer, {});
   if (!s) return 0;
   const [{ total }] = await sequelize.query<{ total: number }>(
-    `SELECT COUNT(*) AS total ${fromFor({})} WHERE ${s.where.join(' AND ')}`,
+    `SELECT COUNT(*) AS total ${fromFor({}, s.byCourse)} WHERE ${s.where.join(' AND ')}`,
     {
       replacements: s.replacements,
       type: QueryTypes.SELECT,

@@ -4,7 +4,7 @@ import type { ReviewInput, RecentReview } from '@shared/schemas/review';
 import type { SubmissionDTO } from '@shared/schemas/submission';
 import type { UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
-import { canSeeApprentice } from '../classes/access';
+import { canSeeSubmission, reachSql } from '../classes/access';
 import { Project } from '../courses/course.model';
 import { loadSubmissionDTO } from '../submissions/submission.mapper';
 import { Submission, SubmissionPhoto, SubmissionVersion } from '../submissions/submission.model';
@@ -32,15 +32,15 @@ function checkReview(project: Project, input: ReviewInput, photoUploadIds: Set<n
 }
 
 /**
- * Records a mentor's review of the version waiting. Who may review: a mentor of one of the apprentice's classes, or
- * the admin; anyone else is told the submission does not exist. Returns the updated submission.
+ * Records a mentor's review of the version waiting. Who may review: a mentor who has the piece in reach (access.ts),
+ * or the admin; anyone else is told the submission does not exist. Returns the updated submission.
  */
 export async function createReview(sequelize: Sequelize, viewer: UserDTO, submissionId: number, input: ReviewInput) {
   const found = submissionId > 0 ? await Submission.findByPk(submissionId) : null;
   if (
     !found ||
     found.status === 'draft' ||
-    !(await canSeeApprentice(viewer, found.apprenticeId)) ||
+    !(await canSeeSubmission(viewer, found)) ||
     found.apprenticeId === viewer.id
   ) {
     throw AppError.notFound('That submission');
@@ -89,13 +89,13 @@ export async function createReview(sequelize: Sequelize, viewer: UserDTO, submis
   return { submission, ...review };
 }
 
-/** Recent reviews: of the apprentice's own pieces, written by the mentor, or all for the admin. */
+/** Recent reviews: of the apprentice's own pieces, written by the mentor of pieces still in reach, or all for the admin. */
 export async function recentReviews(sequelize: Sequelize, viewer: UserDTO, limit: number): Promise<RecentReview[]> {
   const where =
     viewer.role === 'apprentice'
       ? 's.apprenticeId = :userId'
       : viewer.role === 'mentor'
-        ? 'r.mentorId = :userId'
+        ? `r.mentorId = :userId AND ${reachSql(viewer, 's.apprenticeId', '(SELECT l.courseId FROM lessons l WHERE l.id = p.lessonId)')}`
         : '1 = 1';
   const rows = await sequelize.query<Record<string, string | number>>(
     `SELECT r.id, s.id AS submissionId, p.title AS projectTitle, v.number AS version, s.apprenticeId, a.name AS apprenticeName,

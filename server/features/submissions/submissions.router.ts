@@ -49,7 +49,7 @@ export function submissionsRouter({ sequelize, config, mailer, logger }: AppDeps
     const { submission, version, photoCount } = await sendSubmission(sequelize, user, idParam(req));
     const title = submission.project.title;
     const photos = `${photoCount} photo${photoCount === 1 ? '' : 's'}`;
-    for (const mentorId of await mentorsOfApprentice(user.id)) {
+    for (const mentorId of await mentorsOfApprentice(user.id, submission.project.course.id)) {
       const { mailed } = await notify(
         mentorId,
         {

@@ -9,7 +9,8 @@ import type {
 } from '@shared/schemas/submission';
 import type { UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
-import { assertCanSeeApprentice, canSeeApprentice } from '../classes/access';
+import { assertCanSeeApprentice, canSeeSubmission, reachableCourseIds } from '../classes/access';
+import { Lesson, Project } from '../courses/course.model';
 import { assertOwnUploads } from '../uploads/uploads.service';
 import { assertOwnLinks } from './linked-records';
 import { loadSubmissionDTO, projectSummary } from './submission.mapper';
@@ -184,15 +185,24 @@ export async function sendSubmission(sequelize: Sequelize, user: UserDTO, id: nu
 }
 
 export async function getSubmission(sequelize: Sequelize, viewer: UserDTO, id: number): Promise<SubmissionDTO> {
-  const submission = id > 0 ? await Submission.findByPk(id, { attributes: ['id', 'apprenticeId', 'status'] }) : null;
+  const submission =
+    id > 0 ? await Submission.findByPk(id, { attributes: ['id', 'apprenticeId', 'projectId', 'status'] }) : null;
   if (!submission) throw notFound();
   const own = submission.apprenticeId === viewer.id;
-  if (!own && (submission.status === 'draft' || !(await canSeeApprentice(viewer, submission.apprenticeId))))
-    throw notFound();
+  if (!own && (submission.status === 'draft' || !(await canSeeSubmission(viewer, submission)))) throw notFound();
   return (await loadSubmissionDTO(sequelize, id, own))!;
 }
 
-/** An apprentice lists their own pieces; mentors and the admin name an apprentice they may see. */
+async function projectIdsOfCourses(courseIds: number[]): Promise<number[]> {
+  const lessons = await Lesson.findAll({ where: { courseId: { [Op.in]: courseIds } }, attributes: ['id'] });
+  const projects = await Project.findAll({
+    where: { lessonId: { [Op.in]: lessons.map((l) => l.id) } },
+    attributes: ['id'],
+  });
+  return projects.map((p) => p.id);
+}
+
+/** An apprentice lists their own pieces; mentors and the admin name an apprentice, and see the pieces in reach. */
 export async function listSubmissions(viewer: UserDTO, query: SubmissionListQuery): Promise<SubmissionList> {
   let apprenticeId = viewer.id;
   if (viewer.role !== 'apprentice') {
@@ -202,10 +212,14 @@ export async function listSubmissions(viewer: UserDTO, query: SubmissionListQuer
     apprenticeId = query.apprentice;
   }
   const own = apprenticeId === viewer.id;
+  const courseIds = own ? 'all' : await reachableCourseIds(viewer, apprenticeId);
   const rows = await Submission.findAll({
     where: {
       apprenticeId,
-      ...(query.projectId ? { projectId: query.projectId } : {}),
+      [Op.and]: [
+        query.projectId ? { projectId: query.projectId } : {},
+        courseIds === 'all' ? {} : { projectId: { [Op.in]: await projectIdsOfCourses(courseIds) } },
+      ],
       ...(own ? {} : { status: { [Op.ne]: 'draft' } }),
     },
     order: [

@@ -5,8 +5,13 @@ import { AppError } from '../../lib/app-error';
 
 const ACCEPTED = new Set(['image/jpeg', 'image/png', 'image/webp']);
 const HEIC = new Set(['image/heic', 'image/heif', 'image/heic-sequence', 'image/heif-sequence']);
-/** About 100 megapixels: far above any camera photo, low enough that a crafted file cannot exhaust memory. */
-const MAX_INPUT_PIXELS = 100_000_000;
+/**
+ * 50 megapixels: above what phone cameras make (12 to 48), low enough that a tiny crafted file (a flat PNG of
+ * 10,000 x 10,000 is 12 KB) is refused from its header, before any pixel is decoded.
+ */
+export const MAX_INPUT_PIXELS = 50_000_000;
+/** A genuine photo decodes in well under a second; one that is still decoding after this is not worth the core. */
+const DECODE_TIMEOUT_SECONDS = 10;
 
 interface ProcessedImage {
   sourceType: string;
@@ -32,15 +37,25 @@ export async function processImage(bytes: Buffer): Promise<ProcessedImage> {
     const files = await encodeSizes(bytes);
     return { sourceType: mime, width: files.width, height: files.height, files: files.files };
   } catch (err) {
-    if (heic)
-      throw refuse(
-        'HEIC photos cannot be read here. Export the photo as JPEG (most phones and photo apps offer this) and upload it again.',
-      );
-    if (err instanceof Error && /pixel limit/i.test(err.message)) {
-      throw new AppError('IMAGE_TOO_LARGE', 'That picture has more than 100 megapixels. Send a smaller copy.', 413);
-    }
-    throw refuse('That file looks like a picture but could not be read. It may be damaged; try exporting it again.');
+    throw decodeFailure(err, heic);
   }
+}
+
+/** What to tell the person when sharp gives up on their file. */
+export function decodeFailure(err: unknown, heic = false): AppError {
+  const message = err instanceof Error ? err.message : '';
+  if (/pixel limit/i.test(message)) {
+    return new AppError('IMAGE_TOO_LARGE', 'That picture has more than 50 megapixels. Send a smaller copy.', 413);
+  }
+  if (/^timeout/i.test(message)) {
+    return new AppError('IMAGE_TOO_LARGE', 'That picture takes too long to read. Send a smaller or simpler copy.', 413);
+  }
+  if (heic) {
+    return refuse(
+      'HEIC photos cannot be read here. Export the photo as JPEG (most phones and photo apps offer this) and upload it again.',
+    );
+  }
+  return refuse('That file looks like a picture but could not be read. It may be damaged; try exporting it again.');
 }
 
 type Raw = { data: Buffer; info: { width: number; height: number; channels: number } };
@@ -56,6 +71,7 @@ const JPEG = { quality: 84, mozjpeg: false, optimiseCoding: false } as const;
  */
 async function encodeSizes(bytes: Buffer) {
   const full: Raw = await sharp(bytes, { failOn: 'error', limitInputPixels: MAX_INPUT_PIXELS })
+    .timeout({ seconds: DECODE_TIMEOUT_SECONDS })
     .rotate()
     .flatten({ background: '#ffffff' })
     .toColourspace('srgb')

@@ -14,6 +14,7 @@ export class Upload extends Model<InferAttributes<Upload>, InferCreationAttribut
   declare fileKey: string;
   declare width: number;
   declare height: number;
+  /** Bytes on disk of all its stored sizes (what counts toward the owner's quota). */
   declare bytes: number;
   declare sourceType: string;
   declare claimedAt: CreationOptional<Date | null>;

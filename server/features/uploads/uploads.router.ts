@@ -1,12 +1,12 @@
 import { Router } from 'express';
 import multer from 'multer';
-import { UPLOAD_MAX_BYTES, UploadSizeQuery } from '@shared/schemas/upload';
+import { UPLOAD_MAX_BYTES, UploadSizeQuery, type StorageUsage } from '@shared/schemas/upload';
 import type { AppDeps } from '../../app';
 import { AppError } from '../../lib/app-error';
 import { idParam, parseQuery } from '../../lib/validate';
 import { currentUser, requireAuth, requireRole } from '../auth/guards';
 import { uploadFile } from './upload-files';
-import { findViewableUpload, storeUpload, sweepNowAndThen } from './uploads.service';
+import { findViewableUpload, storageUsed, storeUpload, sweepNowAndThen } from './uploads.service';
 
 /** Kept in memory until judged and re-encoded, so a refused or broken upload never touches the disk. */
 const receive = multer({
@@ -19,9 +19,18 @@ export function uploadsRouter({ sequelize, config, logger }: AppDeps) {
 
   router.post('/', requireRole('apprentice'), receive.single('file'), async (req, res) => {
     if (!req.file) throw AppError.badRequest('Choose a photo to upload.', { file: ['Choose a photo to upload.'] });
-    const upload = await storeUpload(config.dataDir, currentUser(req).id, req.file.buffer);
+    const upload = await storeUpload(config.dataDir, currentUser(req).id, req.file.buffer, config.uploadQuotaBytes);
     sweepNowAndThen(sequelize, config.dataDir, (err) => logger.warn({ err }, 'sweep of abandoned uploads failed'));
     res.status(201).json(upload);
+  });
+
+  // Before /:id, which would otherwise take "usage" for an id.
+  router.get('/usage', requireAuth, async (req, res) => {
+    const usage: StorageUsage = {
+      usedBytes: await storageUsed(currentUser(req).id),
+      quotaBytes: config.uploadQuotaBytes,
+    };
+    res.json(usage);
   });
 
   router.get('/:id', requireAuth, async (req, res) => {

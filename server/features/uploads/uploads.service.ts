@@ -1,8 +1,8 @@
 import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
-import type { UploadDTO } from '@shared/schemas/upload';
+import { UPLOAD_SIZES, type UploadDTO } from '@shared/schemas/upload';
 import type { UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
-import { canSeeApprentice } from '../classes/access';
+import { canSeeUpload } from '../classes/access';
 import { processImage } from './image-pipeline';
 import { newFileKey, removeUploadFiles, writeUploadFiles } from './upload-files';
 import { Upload } from './upload.model';
@@ -17,19 +17,44 @@ export const uploadDTO = (u: Pick<Upload, 'id' | 'width' | 'height'>): UploadDTO
   thumbUrl: `/api/uploads/${u.id}?size=thumb`,
 });
 
-/** Re-encodes and stores a photo; if anything fails, no file and no row remain. */
-export async function storeUpload(dataDir: string, ownerId: number, bytes: Buffer): Promise<UploadDTO> {
+/** Bytes on disk of a person's photos, all stored sizes counted. */
+export async function storageUsed(ownerId: number, transaction?: Transaction): Promise<number> {
+  return Number(await Upload.sum('bytes', { where: { ownerId }, transaction })) || 0;
+}
+
+const megabytes = (bytes: number) => `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+const quotaReached = (used: number, quota: number) =>
+  new AppError(
+    'QUOTA_REACHED',
+    `Your photo storage is full: ${megabytes(used)} of ${megabytes(quota)} used, and this photo needs more room. ` +
+      'Ask the guild office for more room.',
+    413,
+  );
+
+/**
+ * Re-encodes and stores a photo; if anything fails, no file and no row remain. A person over `quotaBytes` (null: no
+ * quota, for the demo loader) is refused before the costly decode, and again at the write, under the write lock, so
+ * two uploads at once cannot both squeeze past the last megabytes.
+ */
+export async function storeUpload(
+  dataDir: string,
+  ownerId: number,
+  bytes: Buffer,
+  quotaBytes: number | null,
+): Promise<UploadDTO> {
+  const quota = quotaBytes ?? Infinity;
+  const usedBefore = await storageUsed(ownerId);
+  if (usedBefore >= quota) throw quotaReached(usedBefore, quota);
   const image = await withImageSlot(() => processImage(bytes));
+  const size = UPLOAD_SIZES.reduce((sum, s) => sum + image.files[s].length, 0);
   const fileKey = newFileKey();
   await writeUploadFiles(dataDir, fileKey, image.files);
   try {
-    const upload = await Upload.create({
-      ownerId,
-      fileKey,
-      width: image.width,
-      height: image.height,
-      bytes: image.files.full.length,
-      sourceType: image.sourceType,
+    const upload = await Upload.sequelize!.transaction(async (transaction) => {
+      const used = await storageUsed(ownerId, transaction);
+      if (used + size > quota) throw quotaReached(used, quota);
+      const fields = { ownerId, fileKey, width: image.width, height: image.height, bytes: size };
+      return Upload.create({ ...fields, sourceType: image.sourceType }, { transaction });
     });
     return uploadDTO(upload);
   } catch (err) {
@@ -62,10 +87,10 @@ export async function assertOwnUploads(userId: number, ids: number[], options: {
   await Upload.update({ claimedAt: new Date() }, { where: { id: { [Op.in]: unique }, claimedAt: null }, transaction });
 }
 
-/** The owner, the mentors of the owner's classes and the admin may see a photo; anyone else is told it does not exist. */
+/** Who may see a photo is decided in access.ts; anyone else is told it does not exist. */
 export async function findViewableUpload(viewer: UserDTO, id: number): Promise<Upload> {
   const upload = id > 0 ? await Upload.findByPk(id) : null;
-  if (!upload || !(viewer.id === upload.ownerId || (await canSeeApprentice(viewer, upload.ownerId)))) {
+  if (!upload || !(await canSeeUpload(viewer, upload))) {
     throw AppError.notFound('That photo');
   }
   return upload;

@@ -3,6 +3,7 @@ import { useUser } from '@/features/auth/api/get-me';
 import { AccountProfileForm } from '@/features/auth/components/account-profile-form';
 import { PasswordChangeForm } from '@/features/auth/components/password-change-form';
 import { ROLE_LABEL } from '@/features/auth/role-labels';
+import { StorageUsage } from '@/features/uploads/components/storage-usage';
 
 export function Component() {
   const user = useUser();
@@ -10,7 +11,7 @@ export function Component() {
     <>
       <PageHeader
         title="My account"
-        lead="Your name as mentors and the guild office see it, the units you work in, and your password."
+        lead="Your name as mentors and the guild office see it, the units you work in, your password and, for apprentices, the room your photos take."
       />
       <div className="grid gap-6 md:grid-cols-2">
         <Card>
@@ -30,6 +31,14 @@ export function Component() {
           </p>
           <PasswordChangeForm />
         </Card>
+        {user.role === 'apprentice' && (
+          <Card>
+            <h2 className="font-serif text-xl">Photo storage</h2>
+            <div className="mt-3">
+              <StorageUsage />
+            </div>
+          </Card>
+        )}
       </div>
     </>
   );

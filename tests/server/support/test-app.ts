@@ -24,9 +24,9 @@ export interface SentMail {
 
 /**
  * A fresh app over a fresh, migrated SQLite file in a temporary folder (content/ synced). Mail goes to nodemailer's
- * JSON test transport and is collected in `outbox`.
+ * JSON test transport and is collected in `outbox`. With `logLines`, every line the app logs is pushed there.
  */
-export async function createTestApp(env: Record<string, string> = {}) {
+export async function createTestApp(env: Record<string, string> = {}, options: { logLines?: string[] } = {}) {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'tickwright-test-'));
   const config = loadConfig({
     NODE_ENV: 'test',
@@ -35,7 +35,8 @@ export async function createTestApp(env: Record<string, string> = {}) {
     SESSION_SECRET: 'test-secret-test-secret',
     ...env,
   });
-  const logger = createLogger(config);
+  const { logLines } = options;
+  const logger = createLogger(config, logLines ? { write: (line: string) => void logLines.push(line) } : undefined);
   const { sequelize } = await openAndMigrate(config);
   const outbox: SentMail[] = [];
   const transport = nodemailer.createTransport({ jsonTransport: true });

@@ -1,0 +1,4 @@
+export const uploadKeys = {
+  all: ['uploads'] as const,
+  usage: () => [...uploadKeys.all, 'usage'] as const,
+};
