@@ -74,7 +74,7 @@ export function createApp(deps: AppDeps) {
   api.use(originCheck(config.appUrl));
   api.use('/auth', authRouter({ mailer: deps.mailer, appUrl: config.appUrl }));
   // Feature routers are mounted here, one line each.
-  api.use('/courses', coursesRouter());
+  api.use('/courses', coursesRouter(sequelize));
   api.use('/lessons', lessonsRouter());
   api.use('/search', searchRouter(sequelize));
   api.use('/content', contentImagesRouter());

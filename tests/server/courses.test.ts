@@ -95,6 +95,34 @@ describe('courses and lessons, read by each role', () => {
     }
   });
 
+  it('when a lesson is read again unchanged, then the ETag answers 304 with no body; marking it done changes the answer', async () => {
+    const { agent } = await t.signIn('apprentice');
+    const url = `/api/courses/${GOING}/lessons/broaching-pivot-holes`;
+    const first = await agent.get(url);
+    expect(first.status).toBe(200);
+    const etag = first.headers.etag as string;
+    expect(etag).toMatch(/^W\//);
+    const again = await agent.get(url).set('If-None-Match', etag);
+    expect(again.status).toBe(304);
+    expect(again.text).toBe('');
+    expect((await agent.put(`/api/lessons/${first.body.lesson.id}/done`)).status).toBe(200);
+    const changed = await agent.get(url).set('If-None-Match', etag);
+    expect(changed.status).toBe(200);
+    expect(changed.body.lesson.done).toBe(true);
+  });
+
+  it('when a lesson row is changed behind the catalogue’s back, then reads still answer what was prepared at sync', async () => {
+    // Reads come from the catalogue prepared at sync, not from parsing the stored Markdown on each request.
+    const { agent } = await t.signIn('mentor');
+    const url = `/api/courses/${GOING}/lessons/shop-and-safety`;
+    const before = (await agent.get(url)).body.lesson;
+    await Lesson.update({ body: '# Something else' }, { where: { id: before.id } });
+    const after = (await agent.get(url)).body.lesson;
+    expect(after.body).toBe(before.body);
+    expect(after.outline).toEqual(before.outline);
+    await Lesson.update({ body: before.body }, { where: { id: before.id } });
+  });
+
   it('when the first lesson is opened, then it has no previous lesson', async () => {
     const { agent } = await t.signIn('mentor');
     const res = await agent.get(`/api/courses/${GOING}/lessons/shop-and-safety`);

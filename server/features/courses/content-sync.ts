@@ -2,11 +2,12 @@ import { Op, type Sequelize } from 'sequelize';
 import type { Logger } from '../../lib/logger';
 import { Course, Lesson, Project } from './course.model';
 import { loadContent } from './content-loader';
-import { markSearchStale } from './lesson-search';
+import { prepareCatalogue } from './catalogue';
 
 /**
  * Brings the database in line with content/: rows are matched by slug so ids stay stable across restarts,
  * and anything no longer in content/ is retired (never deleted), so progress and submissions keep their target.
+ * Ends by preparing the in-memory catalogue that course, lesson and search reads are answered from.
  */
 export async function syncContent(sequelize: Sequelize, root: string, logger?: Logger): Promise<void> {
   const { courses, problems } = loadContent(root);
@@ -67,5 +68,5 @@ export async function syncContent(sequelize: Sequelize, root: string, logger?: L
       { where: { id: { [Op.notIn]: keptCourseIds }, retiredAt: null }, transaction },
     );
   });
-  markSearchStale(sequelize);
+  await prepareCatalogue(sequelize);
 }

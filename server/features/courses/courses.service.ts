@@ -1,83 +1,61 @@
-import { Op } from 'sequelize';
 import type { CourseCard, CourseDetailReply, LessonBasicsReply, LessonReply } from '@shared/schemas/course';
 import type { UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
-import { Course, Lesson, Project } from './course.model';
+import type { Catalogue, CatalogueLesson } from './catalogue';
+import { Course, Lesson } from './course.model';
 import { toCourseCard, toLessonListItem, toProjectDTO } from './course.mapper';
-import { lessonOutline, parseLessonMarkdown } from './lesson-markdown';
 import { doneLessonIds } from './progress.service';
 
-/** Every signed-in role reads every live course; retired courses and lessons keep their rows but leave the lists. */
-const live = { retiredAt: null };
-
-async function liveLessons(courseIds: number[]) {
-  return Lesson.findAll({ where: { ...live, courseId: { [Op.in]: courseIds } }, order: [['position', 'ASC']] });
-}
-
+/** Every signed-in role reads every live course, from the catalogue prepared at sync; retired ones are not in it. */
 async function doneFor(viewer: UserDTO) {
   return viewer.role === 'apprentice' ? doneLessonIds(viewer.id) : null;
 }
 
-export async function listCourses(viewer: UserDTO): Promise<CourseCard[]> {
-  const courses = await Course.findAll({
-    where: live,
-    order: [
-      ['position', 'ASC'],
-      ['title', 'ASC'],
-    ],
-  });
-  const lessons = await liveLessons(courses.map((c) => c.id));
+const lessonRows = (lessons: CatalogueLesson[]) => lessons.map((l) => l.lesson);
+
+export async function listCourses(catalogue: Catalogue, viewer: UserDTO): Promise<CourseCard[]> {
   const done = await doneFor(viewer);
-  return courses.map((c) =>
-    toCourseCard(
-      c,
-      lessons.filter((l) => l.courseId === c.id),
-      done,
-    ),
-  );
+  return catalogue.courses.map(({ course, lessons }) => toCourseCard(course, lessonRows(lessons), done));
 }
 
-async function findCourse(slug: string) {
-  const course = await Course.findOne({ where: { slug, ...live } });
-  if (!course) throw AppError.notFound('The course');
-  return course;
+function findCourse(catalogue: Catalogue, slug: string) {
+  const entry = catalogue.bySlug.get(slug);
+  if (!entry) throw AppError.notFound('The course');
+  return entry;
 }
 
-async function liveProjects(lessonIds: number[]) {
-  const projects = await Project.findAll({ where: { ...live, lessonId: { [Op.in]: lessonIds } } });
-  return new Map(projects.map((p) => [p.lessonId, p]));
-}
-
-export async function getCourse(viewer: UserDTO, slug: string): Promise<CourseDetailReply> {
-  const course = await findCourse(slug);
-  const lessons = await liveLessons([course.id]);
+export async function getCourse(catalogue: Catalogue, viewer: UserDTO, slug: string): Promise<CourseDetailReply> {
+  const { course, lessons } = findCourse(catalogue, slug);
   const done = await doneFor(viewer);
-  const projects = await liveProjects(lessons.map((l) => l.id));
   return {
-    course: { ...toCourseCard(course, lessons, done), intro: course.intro, skills: course.skills },
-    lessons: lessons.map((l) => toLessonListItem(l, course.skills, done, projects.get(l.id) ?? null)),
+    course: { ...toCourseCard(course, lessonRows(lessons), done), intro: course.intro, skills: course.skills },
+    lessons: lessons.map((l) => toLessonListItem(l.lesson, course.skills, done, l.project)),
   };
 }
 
-export async function getLesson(viewer: UserDTO, courseSlug: string, lessonSlug: string): Promise<LessonReply> {
-  const course = await findCourse(courseSlug);
-  const lessons = await liveLessons([course.id]);
-  const index = lessons.findIndex((l) => l.slug === lessonSlug);
+export async function getLesson(
+  catalogue: Catalogue,
+  viewer: UserDTO,
+  courseSlug: string,
+  lessonSlug: string,
+): Promise<LessonReply> {
+  const { course, lessons } = findCourse(catalogue, courseSlug);
+  const index = lessons.findIndex((l) => l.lesson.slug === lessonSlug);
   if (index < 0) throw AppError.notFound('The lesson');
-  const lesson = lessons[index];
+  const { lesson, outline, project } = lessons[index];
   const done = await doneFor(viewer);
-  const project = (await liveProjects([lesson.id])).get(lesson.id) ?? null;
-  const link = (l: Lesson | undefined) => (l ? { slug: l.slug, title: l.title } : null);
+  const link = (l: CatalogueLesson | undefined) => (l ? { slug: l.lesson.slug, title: l.lesson.title } : null);
   const { project: _badge, ...item } = toLessonListItem(lesson, course.skills, done, project);
   return {
     course: { id: course.id, slug: course.slug, title: course.title },
-    lesson: { ...item, body: lesson.body, outline: lessonOutline(parseLessonMarkdown(lesson.body)) },
+    lesson: { ...item, body: lesson.body, outline },
     previous: link(lessons[index - 1]),
     next: link(lessons[index + 1]),
     project: project ? toProjectDTO(project) : null,
   };
 }
 
+/** Any lesson by id, retired or not (old submissions and log entries still point at retired ones). */
 export async function getLessonBasics(id: number): Promise<LessonBasicsReply> {
   const lesson = await Lesson.findByPk(id);
   const course = lesson && (await Course.findByPk(lesson.courseId));

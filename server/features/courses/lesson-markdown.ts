@@ -11,7 +11,7 @@ const processor = unified().use(remarkParse).use(remarkGfm).use(remarkDirective)
 
 export const parseLessonMarkdown = (body: string): Root => processor.parse(body);
 
-interface OutlineHeading {
+export interface OutlineHeading {
   depth: number;
   text: string;
   id: string;

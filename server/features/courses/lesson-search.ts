@@ -1,8 +1,6 @@
 import MiniSearch from 'minisearch';
-import type { Sequelize } from 'sequelize';
 import type { SearchResult } from '@shared/schemas/course';
-import { Course, Lesson } from './course.model';
-import { lessonOutline, lessonPlainText, parseLessonMarkdown } from './lesson-markdown';
+import type { CatalogueCourse } from './catalogue';
 
 interface LessonDoc {
   id: number;
@@ -14,53 +12,24 @@ interface LessonDoc {
   lessonSlug: string;
 }
 
-interface LessonIndex {
+export interface LessonSearchIndex {
   search: MiniSearch<LessonDoc>;
   texts: Map<number, string>;
 }
 
-/** One index per database, built from the lesson rows on first need and dropped whenever content is synced. */
-const indexes = new WeakMap<Sequelize, Promise<LessonIndex>>();
-
-export function markSearchStale(sequelize: Sequelize) {
-  indexes.delete(sequelize);
-}
-
-/** Starts building the index ahead of the first search (at start-up); a failure is retried on that search. */
-export function warmSearchIndex(sequelize: Sequelize) {
-  indexFor(sequelize).catch(() => markSearchStale(sequelize));
-}
-
-function indexFor(sequelize: Sequelize): Promise<LessonIndex> {
-  let index = indexes.get(sequelize);
-  if (!index) {
-    index = buildIndex();
-    indexes.set(sequelize, index);
-  }
-  return index;
-}
-
-async function buildIndex(): Promise<LessonIndex> {
-  const courses = await Course.findAll({ where: { retiredAt: null } });
-  const lessons = await Lesson.findAll({ where: { retiredAt: null } });
-  const byId = new Map(courses.map((c) => [c.id, c]));
-  const docs: LessonDoc[] = [];
-  for (const lesson of lessons) {
-    const course = byId.get(lesson.courseId);
-    if (!course) continue;
-    const tree = parseLessonMarkdown(lesson.body);
-    docs.push({
+/** The full-text index of every live lesson, built with the catalogue when content is synced. */
+export function buildSearchIndex(courses: CatalogueCourse[]): LessonSearchIndex {
+  const docs: LessonDoc[] = courses.flatMap(({ course, lessons }) =>
+    lessons.map(({ lesson, outline, text }) => ({
       id: lesson.id,
       title: lesson.title,
-      headings: lessonOutline(tree)
-        .map((h) => h.text)
-        .join('\n'),
-      text: lessonPlainText(tree),
+      headings: outline.map((h) => h.text).join('\n'),
+      text,
       courseSlug: course.slug,
       courseTitle: course.title,
       lessonSlug: lesson.slug,
-    });
-  }
+    })),
+  );
   const search = new MiniSearch<LessonDoc>({
     fields: ['title', 'headings', 'text'],
     storeFields: ['title', 'courseSlug', 'courseTitle', 'lessonSlug'],
@@ -75,8 +44,8 @@ async function buildIndex(): Promise<LessonIndex> {
 }
 
 /** Ranked lessons for a query: every word must match where some lesson has them all, otherwise any word. */
-export async function searchLessons(sequelize: Sequelize, query: string, limit = 20): Promise<SearchResult[]> {
-  const { search, texts } = await indexFor(sequelize);
+export function searchLessons(index: LessonSearchIndex, query: string, limit = 20): SearchResult[] {
+  const { search, texts } = index;
   let hits = search.search(query, { combineWith: 'AND' });
   if (hits.length === 0) hits = search.search(query, { combineWith: 'OR' });
   return hits.slice(0, limit).map((hit) => ({
