@@ -72,7 +72,7 @@ export function createApp(deps: AppDeps) {
   api.use('/health', healthRouter(sequelize));
   api.use(sessionMiddleware(sequelize, config).handlers);
   api.use(originCheck(config.appUrl));
-  api.use('/auth', authRouter({ mailer: deps.mailer, appUrl: config.appUrl }));
+  api.use('/auth', authRouter({ appUrl: config.appUrl }));
   // Feature routers are mounted here, one line each.
   api.use('/courses', coursesRouter(sequelize));
   api.use('/lessons', lessonsRouter());

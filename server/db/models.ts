@@ -9,6 +9,7 @@ import { initClassModels } from '../features/classes/class.model';
 import { initInvitationModel } from '../features/classes/invitation.model';
 import { initCourseModels } from '../features/courses/course.model';
 import { Notification } from '../features/notifications/notification.model';
+import { OutboxMessage } from '../features/outbox/outbox-message.model';
 import { initReviewModels } from '../features/reviews/review.model';
 import { initSubmissionModels } from '../features/submissions/submission.model';
 import { Upload } from '../features/uploads/upload.model';
@@ -30,4 +31,5 @@ export function initModels(sequelize: Sequelize) {
   initInvitationModel(sequelize);
   initAuditModel(sequelize);
   initBenchLogModels(sequelize);
+  OutboxMessage.initModel(sequelize);
 }

@@ -279,7 +279,7 @@ async function tellPeople(
           body: `Version ${piece.versions.length} is waiting in your review queue.`,
           link: `/review/${submissionId}`,
         },
-        null,
+        { email: false },
       );
     }
   } else {
@@ -292,7 +292,7 @@ async function tellPeople(
         body: 'Your mentor has reviewed your piece. Read the scores and the notes on your photos.',
         link: `/pieces/${submissionId}`,
       },
-      null,
+      { email: false },
     );
   }
 }

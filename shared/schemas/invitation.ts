@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { MailStatus, OutboxState } from './outbox';
 import { NewPassword } from './user';
 
 export const INVITATION_DAYS = 14;
@@ -31,12 +32,14 @@ export const InviteResult = z.object({
   email: z.string(),
   outcome: InviteOutcome,
   message: z.string(),
-  /** False when the row was stored but the e-mail could not be sent (resend it from the pending list). */
-  mailed: z.boolean(),
+  /** The e-mail's state in the outbox ("queued" at first); null where no mail was due. */
+  mail: OutboxState.nullable(),
 });
 export type InviteResult = z.infer<typeof InviteResult>;
 
 export const InviteReply = z.object({ results: z.array(InviteResult) });
+
+export const ResendReply = z.object({ mail: MailStatus });
 export type InviteReply = z.infer<typeof InviteReply>;
 
 export const InvitationDTO = z.object({
@@ -49,6 +52,8 @@ export const InvitationDTO = z.object({
   expired: z.boolean(),
   sentAt: z.string(),
   invitedBy: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+  /** What became of the latest e-mail carrying the link (null for invitations older than the outbox). */
+  mail: MailStatus.nullable(),
 });
 export type InvitationDTO = z.infer<typeof InvitationDTO>;
 

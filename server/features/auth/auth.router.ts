@@ -3,7 +3,6 @@ import passport from 'passport';
 import { z } from 'zod';
 import { LoginInput, PasswordResetInput, PasswordResetRequest, type UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
-import type { Mailer } from '../../lib/mailer';
 import { parseBody } from '../../lib/validate';
 import { requireAuth, currentUser } from './guards';
 import { startSignedInSession } from './session';
@@ -23,7 +22,7 @@ const RESET_REQUESTED = {
 };
 const ResetToken = z.string().min(1).max(200);
 
-export function authRouter(deps: { mailer: Mailer; appUrl: string }) {
+export function authRouter(deps: { appUrl: string }) {
   const router = Router();
 
   router.post('/login', requireHttpsForSignIn(deps.appUrl), ...signInLimits(), async (req, res) => {
@@ -49,10 +48,10 @@ export function authRouter(deps: { mailer: Mailer; appUrl: string }) {
 
   router.post('/password-reset', ...resetRequestLimits(), async (req, res) => {
     const { email } = parseBody(PasswordResetRequest, req);
-    // Answered before the lookup and the e-mail, so that neither the reply nor its timing tells whether the
+    // Answered before the lookup and the queued e-mail, so that neither the reply nor its timing tells whether the
     // address has an account. A failure afterwards still reaches the error handler, which logs it.
     res.status(202).json(RESET_REQUESTED);
-    await requestPasswordReset(email, deps.mailer, deps.appUrl);
+    await requestPasswordReset(email, deps.appUrl);
   });
 
   // Lets the reset page say at once that a link is spent, before anyone types a new password.

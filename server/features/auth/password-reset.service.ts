@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { AppError } from '../../lib/app-error';
 import { hashLinkToken, newLinkToken } from '../../lib/link-token';
-import type { Mailer } from '../../lib/mailer';
+import { queueMail } from '../outbox/outbox.service';
 import { endSessions } from './auth.service';
 import { hashPassword } from './passwords';
 import { PasswordReset } from './password-reset.model';
@@ -20,30 +20,38 @@ export const resetLinkGone = () =>
  * Does nothing visible for an unknown or deactivated address: the caller answers the same either way. A new link
  * replaces any open one, so an account never has more than one reset link that works.
  */
-export async function requestPasswordReset(email: string, mailer: Mailer, appUrl: string): Promise<void> {
+export async function requestPasswordReset(email: string, appUrl: string): Promise<void> {
   const user = await User.findOne({ where: { email } });
   if (!user?.active) return;
   const { token, tokenHash, expiresAt } = newLinkToken(VALID_FOR_MS);
+  // The link and its e-mail are written together: one mail per request, delivered by the outbox.
   await PasswordReset.sequelize!.transaction(async (transaction) => {
     await PasswordReset.destroy({ where: { userId: user.id, usedAt: null }, transaction });
     await PasswordReset.create({ userId: user.id, tokenHash, expiresAt, usedAt: null }, { transaction });
-  });
-  await mailer.send({
-    to: user.email,
-    subject: 'Set a new Tickwright password',
-    text: [
-      `Hello ${user.name},`,
-      '',
-      'Someone asked to set a new password for your Tickwright account. If it was you, open this link within one hour:',
-      '',
-      `${appUrl}/reset-password/${token}`,
-      '',
-      'The link works once. If you did not ask for it, you can ignore this e-mail: your password stays as it is.',
-      '',
-      'Tickwright',
-    ].join('\n'),
+    await queueMail(resetMail(user, `${appUrl}/reset-password/${token}`), {
+      kind: 'password-reset',
+      secret: true,
+      expiresAt,
+      transaction,
+    });
   });
 }
+
+const resetMail = (user: User, link: string) => ({
+  to: user.email,
+  subject: 'Set a new Tickwright password',
+  text: [
+    `Hello ${user.name},`,
+    '',
+    'Someone asked to set a new password for your Tickwright account. If it was you, open this link within one hour:',
+    '',
+    link,
+    '',
+    'The link works once. If you did not ask for it, you can ignore this e-mail: your password stays as it is.',
+    '',
+    'Tickwright',
+  ].join('\n'),
+});
 
 /**
  * Spends every open reset link of the account: once the person has shown they know their password (by signing in or

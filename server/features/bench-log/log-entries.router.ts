@@ -42,7 +42,7 @@ function parseEntryBody<S extends z.ZodType>(schema: S, req: Request): z.output<
 
 const entryLink = (id: number) => `/bench-log/${id}`;
 
-export function logEntriesRouter({ sequelize, config, mailer, logger }: AppDeps) {
+export function logEntriesRouter({ sequelize, config }: AppDeps) {
   const router = Router();
   router.use(requireAuth);
   const apprentice = requireRole('apprentice');
@@ -90,35 +90,41 @@ export function logEntriesRouter({ sequelize, config, mailer, logger }: AppDeps)
     res.status(204).end();
   });
 
-  /** The apprentice is told in the app and by e-mail; a mail that fails is logged and never undoes the feedback. */
-  async function tellApprentice(entry: { id: number; apprentice: { id: number } }, title: string, body: string) {
-    const { mailed } = await notify(
-      entry.apprentice.id,
-      { kind: 'log-feedback', title, body, link: entryLink(entry.id) },
-      mailer,
-      { appUrl: config.appUrl },
-    );
-    if (!mailed) logger.warn({ entryId: entry.id }, 'bench-log feedback e-mail not sent');
+  /** Feedback and the apprentice's notice (with its e-mail in the outbox) are stored in one transaction. */
+  function withNotice<T extends { id: number; title: string; date: string; apprentice: { id: number } }>(
+    give: () => Promise<T>,
+    tell: (entry: T) => { title: string; body: string },
+  ): Promise<T> {
+    return sequelize.transaction(async () => {
+      const entry = await give();
+      const notice = { kind: 'log-feedback', ...tell(entry), link: entryLink(entry.id) };
+      await notify(entry.apprentice.id, notice, { appUrl: config.appUrl });
+      return entry;
+    });
   }
 
   router.post('/:id/comments', async (req, res) => {
     const mentor = currentUser(req);
-    const entry = await addComment(mentor, idParam(req), parseBody(LogCommentInput, req));
-    await tellApprentice(
-      entry,
-      `${mentor.name} commented on “${entry.title}”`,
-      `${mentor.name} wrote on your bench-log entry “${entry.title}” (${entry.date}).`,
+    const input = parseBody(LogCommentInput, req);
+    const entry = await withNotice(
+      () => addComment(mentor, idParam(req), input),
+      (e) => ({
+        title: `${mentor.name} commented on “${e.title}”`,
+        body: `${mentor.name} wrote on your bench-log entry “${e.title}” (${e.date}).`,
+      }),
     );
     res.status(201).json(entry);
   });
 
   router.post('/:id/grades', async (req, res) => {
     const mentor = currentUser(req);
-    const entry = await addGrade(mentor, idParam(req), parseBody(LogGradeInput, req));
-    await tellApprentice(
-      entry,
-      `${mentor.name} graded “${entry.title}”`,
-      `${mentor.name} graded the record of your bench-log entry “${entry.title}” (${entry.date}).`,
+    const input = parseBody(LogGradeInput, req);
+    const entry = await withNotice(
+      () => addGrade(mentor, idParam(req), input),
+      (e) => ({
+        title: `${mentor.name} graded “${e.title}”`,
+        body: `${mentor.name} graded the record of your bench-log entry “${e.title}” (${e.date}).`,
+      }),
     );
     res.status(201).json(entry);
   });

@@ -19,6 +19,8 @@ export class Invitation extends Model<InferAttributes<Invitation>, InferCreation
   declare acceptedAt: CreationOptional<Date | null>;
   declare revokedAt: CreationOptional<Date | null>;
   declare invitedById: number | null;
+  /** The outbox message that carried the latest link. */
+  declare mailId: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -35,6 +37,7 @@ export function initInvitationModel(sequelize: Sequelize) {
       acceptedAt: { type: DataTypes.DATE, allowNull: true },
       revokedAt: { type: DataTypes.DATE, allowNull: true },
       invitedById: { type: DataTypes.INTEGER, allowNull: true },
+      mailId: { type: DataTypes.INTEGER, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

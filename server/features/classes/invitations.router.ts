@@ -10,8 +10,6 @@ import {
 } from '@shared/schemas/invitation';
 import type { Config } from '../../config/env';
 import { AppError } from '../../lib/app-error';
-import type { Logger } from '../../lib/logger';
-import type { Mailer } from '../../lib/mailer';
 import { idParam, parseBody, parseQuery } from '../../lib/validate';
 import { currentUser, requireRole } from '../auth/guards';
 import { requireHttpsForSignIn } from '../auth/secure-sign-in';
@@ -27,14 +25,12 @@ import {
 import { parseRosterCsv } from './roster-csv';
 
 export interface InvitationDeps {
-  mailer: Mailer;
   config: Config;
-  logger: Logger;
 }
 
 const LINK_WINDOW_MS = 15 * 60 * 1000;
 
-const mailDeps = (deps: InvitationDeps) => ({ mailer: deps.mailer, appUrl: deps.config.appUrl, logger: deps.logger });
+const mailDeps = (deps: InvitationDeps) => ({ appUrl: deps.config.appUrl });
 
 // A roster of 200 people is a few kilobytes; anything near this limit is not a roster.
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: 256 * 1024, files: 1 } }).single('file');

@@ -2,11 +2,11 @@ import type { Transaction } from 'sequelize';
 import type { InvitationDTO, InviteResult, RosterPreviewRow } from '@shared/schemas/invitation';
 import type { UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
-import type { Logger } from '../../lib/logger';
-import type { Mailer, OutgoingMail } from '../../lib/mailer';
+import type { MailStatus } from '@shared/schemas/outbox';
 import { recordAudit } from '../audit/audit.service';
 import { User } from '../auth/user.model';
 import { Course } from '../courses/course.model';
+import { mailStatuses, queueMail } from '../outbox/outbox.service';
 import { Enrolment, GuildClass } from './class.model';
 import { enrolledMail, invitationMail } from './invitation-mail';
 import { Invitation } from './invitation.model';
@@ -14,9 +14,7 @@ import { newInvitationToken } from './invitation-token';
 import { isSuccess, outcomeMessage, planInvites, type Invitee } from './invite-planner';
 
 export interface MailDeps {
-  mailer: Mailer;
   appUrl: string;
-  logger: Logger;
 }
 
 async function openClass(classId: number, transaction?: Transaction) {
@@ -43,7 +41,7 @@ export async function previewInvites(
   }));
 }
 
-/** Enrols existing apprentices and invites new addresses; mail goes out only once the rows are stored. */
+/** Enrols existing apprentices and invites new addresses; each one's e-mail is queued in the same transaction. */
 export async function inviteToClass(
   classId: number,
   invitees: Invitee[],
@@ -51,7 +49,6 @@ export async function inviteToClass(
   deps: MailDeps,
   source: 'e-mail' | 'roster file',
 ): Promise<InviteResult[]> {
-  const outgoing: (OutgoingMail | null)[] = [];
   const plans = await GuildClass.sequelize!.transaction(async (transaction) => {
     const { cls, info } = await openClass(classId, transaction);
     const plans = await planInvites(cls, invitees, transaction);
@@ -67,13 +64,16 @@ export async function inviteToClass(
           { classId, className: cls.name, source },
           transaction,
         );
-        outgoing.push(enrolledMail(deps.appUrl, user.email, user.name, info));
+        await queueMail(enrolledMail(deps.appUrl, user.email, user.name, info), { kind: 'enrolment', transaction });
       } else if (plan.outcome === 'invited') {
         const { token, tokenHash, expiresAt } = newInvitationToken();
         const fields = { tokenHash, expiresAt, name: plan.name ?? plan.expired?.name ?? null, invitedById: actor.id };
         const invitation = plan.expired
           ? await plan.expired.update(fields, { transaction })
           : await Invitation.create({ classId, email: plan.email, ...fields }, { transaction });
+        const mail = invitationMail(deps.appUrl, plan.email, invitation.name, token, expiresAt, info);
+        const queued = await queueMail(mail, { kind: 'invitation', secret: true, expiresAt, transaction });
+        await invitation.update({ mailId: queued.id }, { transaction });
         await recordAudit(
           actor.id,
           'invitation.sent',
@@ -81,8 +81,7 @@ export async function inviteToClass(
           { classId, className: cls.name, source },
           transaction,
         );
-        outgoing.push(invitationMail(deps.appUrl, plan.email, invitation.name, token, expiresAt, info));
-      } else outgoing.push(null);
+      }
     }
     if (source === 'roster file') {
       const count = (o: string) => plans.filter((p) => p.outcome === o).length;
@@ -102,24 +101,12 @@ export async function inviteToClass(
     return plans;
   });
 
-  const results: InviteResult[] = [];
-  for (const [i, plan] of plans.entries()) {
-    const mail = outgoing[i];
-    const mailed = mail ? await sendQuietly(deps, mail) : false;
-    results.push({ email: plan.email, outcome: plan.outcome, message: outcomeMessage(plan.outcome), mailed });
-  }
-  return results;
-}
-
-/** A failed send must not undo the stored invitation: it is reported, and the admin can resend. */
-async function sendQuietly(deps: MailDeps, mail: OutgoingMail): Promise<boolean> {
-  try {
-    await deps.mailer.send(mail);
-    return true;
-  } catch (err) {
-    deps.logger.error({ err, to: mail.to }, 'invitation mail could not be sent');
-    return false;
-  }
+  return plans.map((plan) => ({
+    email: plan.email,
+    outcome: plan.outcome,
+    message: outcomeMessage(plan.outcome),
+    mail: isSuccess(plan.outcome) ? 'queued' : null,
+  }));
 }
 
 /** Invitations neither accepted nor revoked, expired ones included (flagged), so that they can be resent. */
@@ -134,6 +121,7 @@ export async function listPendingInvitations(classId?: number): Promise<Invitati
   });
   const inviterIds = [...new Set(rows.flatMap((r) => (r.invitedById ? [r.invitedById] : [])))];
   const inviters = await User.findAll({ where: { id: inviterIds }, attributes: ['id', 'name'] });
+  const mails = await mailStatuses(rows.map((r) => r.mailId));
   const className = new Map(classes.map((c) => [c.id, c.name]));
   const inviter = new Map(inviters.map((u) => [u.id, { id: u.id, name: u.name }]));
   const now = new Date();
@@ -147,6 +135,7 @@ export async function listPendingInvitations(classId?: number): Promise<Invitati
     expired: r.expiresAt <= now,
     sentAt: r.updatedAt.toISOString(),
     invitedBy: (r.invitedById && inviter.get(r.invitedById)) || null,
+    mail: (r.mailId && mails.get(r.mailId)) || null,
   }));
 }
 
@@ -156,13 +145,15 @@ async function findPending(id: number, transaction: Transaction) {
   return invitation;
 }
 
-/** A new token and a new 14 days; the old link stops working at once. */
-export async function resendInvitation(id: number, actor: UserDTO, deps: MailDeps): Promise<{ mailed: boolean }> {
-  const mail = await GuildClass.sequelize!.transaction(async (transaction) => {
+/** A new token and a new 14 days; the old link stops working at once and the new one is queued. */
+export async function resendInvitation(id: number, actor: UserDTO, deps: MailDeps): Promise<{ mail: MailStatus }> {
+  await GuildClass.sequelize!.transaction(async (transaction) => {
     const invitation = await findPending(id, transaction);
     const { info } = await openClass(invitation.classId, transaction);
     const { token, tokenHash, expiresAt } = newInvitationToken();
-    await invitation.update({ tokenHash, expiresAt, invitedById: actor.id }, { transaction });
+    const mail = invitationMail(deps.appUrl, invitation.email, invitation.name, token, expiresAt, info);
+    const queued = await queueMail(mail, { kind: 'invitation', secret: true, expiresAt, transaction });
+    await invitation.update({ tokenHash, expiresAt, invitedById: actor.id, mailId: queued.id }, { transaction });
     await recordAudit(
       actor.id,
       'invitation.resent',
@@ -170,9 +161,8 @@ export async function resendInvitation(id: number, actor: UserDTO, deps: MailDep
       { classId: invitation.classId, className: info.className },
       transaction,
     );
-    return invitationMail(deps.appUrl, invitation.email, invitation.name, token, expiresAt, info);
   });
-  return { mailed: await sendQuietly(deps, mail) };
+  return { mail: { state: 'queued', lastError: null } };
 }
 
 export async function revokeInvitation(id: number, actor: UserDTO): Promise<void> {

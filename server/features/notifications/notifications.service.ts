@@ -1,7 +1,7 @@
 import { NOTIFICATIONS_PAGE_SIZE, type NotificationDTO, type NotificationList } from '@shared/schemas/notification';
 import { AppError } from '../../lib/app-error';
-import type { Mailer } from '../../lib/mailer';
 import { User } from '../auth/user.model';
+import { queueMail } from '../outbox/outbox.service';
 import { Notification } from './notification.model';
 
 interface Notice {
@@ -16,26 +16,24 @@ interface Notice {
 interface NotifyOptions {
   /** The app's origin, so that the e-mail carries a full link; without it the mail names the path only. */
   appUrl?: string;
-  /** Set false for an in-app notice without e-mail. */
+  /** Set false for an in-app notice without e-mail (demo data, for one). */
   email?: boolean;
 }
 
 /**
- * Tells one person about something: an in-app notice, and an e-mail when a mailer is given. Call it after the change
- * it describes has been committed. A mail that cannot be sent never undoes the notice: it is reported in `mailed`.
+ * Tells one person about something: an in-app notice and, for an active account, an e-mail in the outbox. Call it
+ * inside the transaction of the change it reports, so that the notice and its mail exist exactly when the change
+ * does; the outbox delivers the mail afterwards, whatever the mail server does.
  */
-export async function notify(userId: number, notice: Notice, mailer: Mailer | null, options: NotifyOptions = {}) {
-  const user = await User.findByPk(userId, { attributes: ['id', 'email', 'name', 'active'] });
-  if (!user) return { notificationId: null, mailed: false };
-  const row = await Notification.create({
-    userId,
-    kind: notice.kind,
-    title: notice.title,
-    body: notice.body,
-    link: notice.link ?? null,
-  });
-  let mailed = false;
-  if (mailer && options.email !== false && user.active) {
+export async function notify(userId: number, notice: Notice, options: NotifyOptions = {}) {
+  return Notification.sequelize!.transaction(async (transaction) => {
+    const user = await User.findByPk(userId, { attributes: ['id', 'email', 'name', 'active'], transaction });
+    if (!user) return { notificationId: null, mailId: null };
+    const row = await Notification.create(
+      { userId, kind: notice.kind, title: notice.title, body: notice.body, link: notice.link ?? null },
+      { transaction },
+    );
+    if (options.email === false || !user.active) return { notificationId: row.id, mailId: null };
     const url = notice.link ? `${options.appUrl ?? ''}${notice.link}` : null;
     const text = [
       `Hello ${user.name.split(' ')[0]},`,
@@ -45,14 +43,9 @@ export async function notify(userId: number, notice: Notice, mailer: Mailer | nu
       '',
       '— Tickwright',
     ].join('\n');
-    try {
-      await mailer.send({ to: user.email, subject: notice.title, text });
-      mailed = true;
-    } catch {
-      mailed = false;
-    }
-  }
-  return { notificationId: row.id, mailed };
+    const mail = await queueMail({ to: user.email, subject: notice.title, text }, { kind: 'notification', transaction });
+    return { notificationId: row.id, mailId: mail.id };
+  });
 }
 
 const toDTO = (n: Notification): NotificationDTO => ({

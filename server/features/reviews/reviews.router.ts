@@ -13,7 +13,7 @@ import { createReview, recentReviews } from './reviews.service';
 const RecentQuery = z.object({ limit: z.coerce.number().int().min(1).max(50).default(10) });
 
 /** Mounted at the API root: it answers /review-queue, /reviews and /submissions/:id/reviews, and nothing else. */
-export function reviewsRouter({ sequelize, config, mailer, logger }: AppDeps) {
+export function reviewsRouter({ sequelize, config }: AppDeps) {
   const router = Router();
   const reviewer = requireRole('mentor', 'admin');
 
@@ -37,34 +37,33 @@ export function reviewsRouter({ sequelize, config, mailer, logger }: AppDeps) {
   router.post('/submissions/:id/reviews', reviewer, async (req, res) => {
     const mentor = currentUser(req);
     const input = parseBody(ReviewInput, req);
-    const { submission, version, weightedScore, passMark, pinCount } = await createReview(
-      sequelize,
-      mentor,
-      idParam(req),
-      input,
-    );
-    const title = submission.project.title;
-    const score = `weighted score ${formatScore(weightedScore)} of 4, pass mark ${formatScore(passMark)}`;
-    const pins = pinCount === 0 ? '' : ` There ${pinCount === 1 ? 'is 1 pin' : `are ${pinCount} pins`} on your photos.`;
-    const { mailed } = await notify(
-      submission.apprentice.id,
-      input.outcome === 'passed'
-        ? {
-            kind: 'submission-passed',
-            title: `“${title}” passed`,
-            body: `${mentor.name} reviewed version ${version} of “${title}”: passed, ${score}.${pins}`,
-            link: paths.submission(submission.id),
-          }
-        : {
-            kind: 'submission-rework',
-            title: `“${title}” needs rework`,
-            body: `${mentor.name} reviewed version ${version} of “${title}” and asks for rework (${score}).${pins} Read the scores and notes, then send a new version.`,
-            link: paths.submission(submission.id),
-          },
-      mailer,
-      { appUrl: config.appUrl },
-    );
-    if (!mailed) logger.warn({ submissionId: submission.id }, 'review e-mail not sent');
+    // The review and the apprentice's notice (with its e-mail in the outbox) are stored together or not at all.
+    const submission = await sequelize.transaction(async () => {
+      const review = await createReview(sequelize, mentor, idParam(req), input);
+      const { submission, version, weightedScore, passMark, pinCount } = review;
+      const title = submission.project.title;
+      const score = `weighted score ${formatScore(weightedScore)} of 4, pass mark ${formatScore(passMark)}`;
+      const pins =
+        pinCount === 0 ? '' : ` There ${pinCount === 1 ? 'is 1 pin' : `are ${pinCount} pins`} on your photos.`;
+      await notify(
+        submission.apprentice.id,
+        input.outcome === 'passed'
+          ? {
+              kind: 'submission-passed',
+              title: `“${title}” passed`,
+              body: `${mentor.name} reviewed version ${version} of “${title}”: passed, ${score}.${pins}`,
+              link: paths.submission(submission.id),
+            }
+          : {
+              kind: 'submission-rework',
+              title: `“${title}” needs rework`,
+              body: `${mentor.name} reviewed version ${version} of “${title}” and asks for rework (${score}).${pins} Read the scores and notes, then send a new version.`,
+              link: paths.submission(submission.id),
+            },
+        { appUrl: config.appUrl },
+      );
+      return submission;
+    });
     res.status(201).json(submission);
   });
 

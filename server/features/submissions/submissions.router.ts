@@ -16,7 +16,7 @@ import {
 } from './submissions.service';
 import { paths } from './links';
 
-export function submissionsRouter({ sequelize, config, mailer, logger }: AppDeps) {
+export function submissionsRouter({ sequelize, config }: AppDeps) {
   const router = Router();
   const apprentice = requireRole('apprentice');
 
@@ -46,26 +46,28 @@ export function submissionsRouter({ sequelize, config, mailer, logger }: AppDeps
 
   router.post('/:id/send', apprentice, async (req, res) => {
     const user = currentUser(req);
-    const { submission, version, photoCount } = await sendSubmission(sequelize, user, idParam(req));
-    const title = submission.project.title;
-    const photos = `${photoCount} photo${photoCount === 1 ? '' : 's'}`;
-    for (const mentorId of await mentorsOfApprentice(user.id, submission.project.course.id)) {
-      const { mailed } = await notify(
-        mentorId,
-        {
-          kind: 'submission-sent',
-          title:
-            version === 1
-              ? `${user.name} sent “${title}” for review`
-              : `${user.name} sent version ${version} of “${title}”`,
-          body: `${user.name} sent version ${version} of “${title}” (${submission.project.lesson.title}) with ${photos}. It is waiting in your review queue.`,
-          link: paths.review(submission.id),
-        },
-        mailer,
-        { appUrl: config.appUrl },
-      );
-      if (!mailed) logger.warn({ mentorId, submissionId: submission.id }, 'review request e-mail not sent');
-    }
+    // Sent, and each mentor told (notice plus e-mail in the outbox), in one transaction.
+    const submission = await sequelize.transaction(async () => {
+      const { submission, version, photoCount } = await sendSubmission(sequelize, user, idParam(req));
+      const title = submission.project.title;
+      const photos = `${photoCount} photo${photoCount === 1 ? '' : 's'}`;
+      for (const mentorId of await mentorsOfApprentice(user.id, submission.project.course.id)) {
+        await notify(
+          mentorId,
+          {
+            kind: 'submission-sent',
+            title:
+              version === 1
+                ? `${user.name} sent “${title}” for review`
+                : `${user.name} sent version ${version} of “${title}”`,
+            body: `${user.name} sent version ${version} of “${title}” (${submission.project.lesson.title}) with ${photos}. It is waiting in your review queue.`,
+            link: paths.review(submission.id),
+          },
+          { appUrl: config.appUrl },
+        );
+      }
+      return submission;
+    });
     res.json(submission);
   });
 

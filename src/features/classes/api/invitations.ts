@@ -1,6 +1,11 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
-import { InvitationListReply, InviteReply, RosterPreviewReply, type RosterRow } from '@shared/schemas/invitation';
+import {
+  InvitationListReply,
+  InviteReply,
+  ResendReply,
+  RosterPreviewReply,
+  type RosterRow,
+} from '@shared/schemas/invitation';
 import { api } from '@/lib/api-client';
 import { classKeys } from './class-keys';
 
@@ -11,6 +16,8 @@ export const usePendingInvitations = (classId?: number) =>
     queryFn: async () =>
       (await api(classId ? `/invitations?classId=${classId}` : '/invitations', { schema: InvitationListReply }))
         .invitations,
+    // While an e-mail is still in the outbox, look again now and then so that "Queued" turns into what happened.
+    refetchInterval: (query) => (query.state.data?.some((i) => i.mail?.state === 'queued') ? 5000 : false),
   });
 
 /** Anything that invites or changes an invitation moves seats, counts and the roster: refresh them all. */
@@ -51,7 +58,7 @@ export function useResendInvitation() {
   const invalidate = useInvalidateClasses();
   return useMutation({
     mutationFn: (id: number) =>
-      api(`/invitations/${id}/resend`, { method: 'POST', schema: z.object({ mailed: z.boolean() }) }),
+      api(`/invitations/${id}/resend`, { method: 'POST', schema: ResendReply }),
     onSuccess: invalidate,
   });
 }

@@ -21,10 +21,10 @@ export function InviteResults({ results }: { results: InviteResult[] }) {
               )}
               <span>
                 <span className="font-semibold">{r.email || '(empty)'}</span>: {r.message}
-                {ok && !r.mailed && (
-                  <span className="text-error">
+                {r.mail === 'queued' && (
+                  <span className="text-muted">
                     {' '}
-                    The e-mail could not be sent; resend it from the pending invitations.
+                    The e-mail is queued; the pending invitations show when it has gone out.
                   </span>
                 )}
               </span>

@@ -3,6 +3,7 @@ import { Button } from '@/components/ui/button';
 import { ConfirmStep } from '@/components/ui/confirm-step';
 import { EmptyState, ErrorNotice, Loading } from '@/components/ui/states';
 import { useResendInvitation, useRevokeInvitation, usePendingInvitations } from '../api/invitations';
+import { MailState } from '@/features/outbox/components/mail-state';
 import { formatWhen } from './format';
 
 /** Invitations not yet accepted: resending issues a new link (the old one stops working), revoking ends it. */
@@ -36,6 +37,9 @@ export function PendingInvitations({ classId }: { classId?: number }) {
                 Link valid until
               </th>
               <th scope="col" className="p-3">
+                E-mail
+              </th>
+              <th scope="col" className="p-3">
                 <span className="sr-only">Actions</span>
               </th>
             </tr>
@@ -60,6 +64,9 @@ export function PendingInvitations({ classId }: { classId?: number }) {
                   )}
                 </td>
                 <td className="p-3">
+                  {inv.mail ? <MailState {...inv.mail} /> : <span className="text-muted">Not recorded</span>}
+                </td>
+                <td className="p-3">
                   <span className="flex flex-wrap justify-end gap-2">
                     <Button
                       variant="secondary"
@@ -67,10 +74,7 @@ export function PendingInvitations({ classId }: { classId?: number }) {
                       aria-label={`Resend invitation to ${inv.email}`}
                       onClick={() =>
                         resend.mutate(inv.id, {
-                          onSuccess: (r) =>
-                            r.mailed
-                              ? toast.success(`A new link is on its way to ${inv.email}.`)
-                              : toast.error('The e-mail could not be sent.'),
+                          onSuccess: () => toast.success(`A new link is queued for ${inv.email}.`),
                         })
                       }
                     >
