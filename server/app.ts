@@ -19,18 +19,17 @@ import { searchRouter } from './features/courses/search.router';
 import { healthRouter } from './features/health/health.router';
 import { usersRouter } from './features/users/users.router';
 import { notificationsRouter } from './features/notifications/notifications.router';
+import { outboxRouter } from './features/outbox/outbox.router';
 import { reviewsRouter } from './features/reviews/reviews.router';
 import { submissionsRouter } from './features/submissions/submissions.router';
 import { uploadsRouter } from './features/uploads/uploads.router';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import { httpLogger, type Logger } from './lib/logger';
 import { rejectBadAddress, rejectBadBody } from './lib/text-guard';
-import type { Mailer } from './lib/mailer';
 
 export interface AppDeps {
   sequelize: Sequelize;
   config: Config;
-  mailer: Mailer;
   logger: Logger;
   /** Folder of the built client; when absent (tests, `npm run dev`) only the API is served. */
   clientDir?: string;
@@ -89,6 +88,7 @@ export function createApp(deps: AppDeps) {
   api.use('/submissions', submissionsRouter(deps));
   api.use(reviewsRouter(deps));
   api.use('/notifications', notificationsRouter());
+  api.use('/outbox', outboxRouter());
   api.use('/log-entries', logEntriesRouter(deps));
   api.use(apiNotFound);
   app.use('/api', api);

@@ -7,6 +7,7 @@ import { seedDemo } from './demo/seed';
 import { startDevMailServer } from './lib/dev-mail';
 import { createLogger } from './lib/logger';
 import { createMailer } from './lib/mailer';
+import { createOutboxWorker } from './features/outbox/outbox-worker';
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, '..', 'dist');
 
@@ -21,11 +22,14 @@ const inbox = await startDevMailServer(config).catch((err: Error) => {
   logger.warn(`Local fake mail service did not start (${err.message}); e-mail will fail until SMTP_URL is set.`);
   return null;
 });
+const mailer = createMailer(config);
+// Whatever was still queued when the server last stopped goes out now.
+const outbox = createOutboxWorker({ mailer, logger });
+outbox.start();
 const app = createApp({
   sequelize,
   config,
   logger,
-  mailer: createMailer(config),
   devMailInbox: inbox,
   clientDir: existsSync(path.join(CLIENT_DIR, 'index.html')) ? CLIENT_DIR : undefined,
 });
@@ -39,5 +43,8 @@ server.on('error', (err) => {
   process.exit(1);
 });
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
-  process.on(signal, () => server.close(() => sequelize.close().then(() => process.exit(0))));
+  process.on(signal, () => {
+    outbox.stop();
+    server.close(() => sequelize.close().then(() => process.exit(0)));
+  });
 }

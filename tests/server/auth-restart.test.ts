@@ -1,7 +1,6 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import nodemailer from 'nodemailer';
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
@@ -11,7 +10,6 @@ import { hashPassword } from '../../server/features/auth/passwords';
 import { Session } from '../../server/features/auth/session.model';
 import { User } from '../../server/features/auth/user.model';
 import { createLogger } from '../../server/lib/logger';
-import { createMailer } from '../../server/lib/mailer';
 import { ORIGIN, TEST_PASSWORD } from './support/test-app';
 
 const dataDir = mkdtempSync(path.join(tmpdir(), 'tickwright-restart-'));
@@ -21,8 +19,7 @@ afterAll(() => rmSync(dataDir, { recursive: true, force: true }));
 async function start(sessionSecret = 'restart-secret-restart-secret') {
   const config = loadConfig({ NODE_ENV: 'test', DATA_DIR: dataDir, APP_URL: ORIGIN, SESSION_SECRET: sessionSecret });
   const { sequelize } = await openAndMigrate(config);
-  const mailer = createMailer(config, nodemailer.createTransport({ jsonTransport: true }));
-  const app = createApp({ sequelize, config, mailer, logger: createLogger(config) });
+  const app = createApp({ sequelize, config, logger: createLogger(config) });
   return { app, stop: () => sequelize.close() };
 }
 

@@ -272,7 +272,7 @@ describe('grading and edits', () => {
 
   it('when a mentor comments and grades, then the apprentice is told in the app and by e-mail with a link to the entry', async () => {
     const { id } = await addEntry(ned, { title: 'Tell me', minutes: 5 });
-    const mailsBefore = t.outbox.length;
+    const mailsBefore = (await t.deliverMail()).length;
     await cast.mentorThis.agent.post(`/api/log-entries/${id}/comments`).send({ body: 'Measure the end shake twice.' });
     await cast.mentorThis.agent
       .post(`/api/log-entries/${id}/grades`)
@@ -284,7 +284,7 @@ describe('grading and edits', () => {
       `${cast.mentorThis.user.name} commented on “Tell me”`,
       `${cast.mentorThis.user.name} graded “Tell me”`,
     ]);
-    const mails = t.outbox.slice(mailsBefore);
+    const mails = (await t.deliverMail()).slice(mailsBefore);
     expect(mails.map((m) => m.to)).toEqual([cast.apprenticeIn.user.email, cast.apprenticeIn.user.email]);
     expect(mails[0].text).toContain(`/bench-log/${id}`);
   });

@@ -13,7 +13,7 @@ it('when one client keeps trying wrong invitation links, then it is stopped with
   const { agent } = await t.signIn('admin');
   const cls = await makeClass();
   await agent.post(`/api/classes/${cls.id}/invitations`).send({ emails: ['patient@example.test'] });
-  const token = tokenFromMail(t.outbox.at(-1)!.text);
+  const token = tokenFromMail((await t.deliverMail()).at(-1)!.text);
 
   const visitor = t.anon();
   for (let i = 0; i < 3; i++) expect((await visitor.get(`/api/invitations/${token}`)).status).toBe(200);

@@ -74,7 +74,8 @@ describe('a mentor reaches only the course of the class they teach', () => {
     expect((await bram.agent.get(`/api/submissions/${trainPiece.id}`)).status).toBe(404);
     expect((await bram.agent.get(`/api/uploads/${springsPiece.uploadIds[0]}`)).status).toBe(200);
     // Each piece was announced only to the mentor of its course's class.
-    const mailsTo = (email: string) => t.outbox.filter((m) => m.to === email).map((m) => m.subject);
+    const sent = await t.deliverMail();
+    const mailsTo = (email: string) => sent.filter((m) => m.to === email).map((m) => m.subject);
     expect(mailsTo(odile.user.email)).toEqual([expect.stringContaining(trainProject.title)]);
     expect(mailsTo(bram.user.email)).toEqual([expect.stringContaining(springsProject.title)]);
   });

@@ -58,7 +58,7 @@ describe('roster files', () => {
     ]);
     expect(res.body).toMatchObject({ okCount: 2, problemCount: 4 });
     expect(await Invitation.count({ where: { classId: cls.id } })).toBe(0);
-    expect(t.outbox.filter((m) => m.to === 'caspian@example.test')).toEqual([]);
+    expect((await t.deliverMail()).filter((m) => m.to === 'caspian@example.test')).toEqual([]);
   });
 
   it('when the file is not a CSV, then it is refused with a message and nothing is stored', async () => {
@@ -95,7 +95,9 @@ describe('roster files', () => {
       ['elias@example.test', 'Elias Brindlecombe'],
       ['tamsin@example.test', 'Tamsin Quarrell'],
     ]);
-    expect(t.outbox.filter((m) => m.to === 'tamsin@example.test')[0].text).toMatch(/Hello Tamsin Quarrell/);
+    expect((await t.deliverMail()).filter((m) => m.to === 'tamsin@example.test')[0].text).toMatch(
+      /Hello Tamsin Quarrell/,
+    );
   });
 });
 

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Notification } from '../../server/features/notifications/notification.model';
 import { notify } from '../../server/features/notifications/notifications.service';
+import { OutboxMessage } from '../../server/features/outbox/outbox-message.model';
 import { createTestApp, type TestApp } from './support/test-app';
 
 let t: TestApp;
@@ -10,23 +11,18 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 describe('notifications', () => {
-  it('when notify is called with a mailer, then a notice is stored and an e-mail with the full link is sent', async () => {
+  it('when notify is called, then a notice is stored and an e-mail with the full link waits in the outbox', async () => {
     const { agent, user } = await t.signIn('apprentice');
-    const mailer = {
-      sent: [] as { to: string; subject: string; text: string }[],
-      send: async function (m: { to: string; subject: string; text: string }) {
-        this.sent.push(m);
-      },
-    };
     const result = await notify(
       user.id,
       { kind: 'test', title: 'Plate back', body: 'Your plate was reviewed.', link: '/pieces/1' },
-      mailer,
       { appUrl: 'http://bench.test' },
     );
-    expect(result.mailed).toBe(true);
-    expect(mailer.sent[0]).toMatchObject({ to: user.email, subject: 'Plate back' });
-    expect(mailer.sent[0].text).toContain('http://bench.test/pieces/1');
+    const queued = await OutboxMessage.findByPk(result.mailId!);
+    expect(queued).toMatchObject({ to: user.email, subject: 'Plate back', state: 'queued', kind: 'notification' });
+    const sent = (await t.deliverMail()).filter((m) => m.to === user.email);
+    expect(sent).toHaveLength(1);
+    expect(sent[0].text).toContain('http://bench.test/pieces/1');
     const list = await agent.get('/api/notifications');
     expect(list.body).toMatchObject({
       unreadCount: 1,
@@ -35,17 +31,18 @@ describe('notifications', () => {
     });
   });
 
-  it('when the mail cannot be sent, then the notice stays and mailed is false', async () => {
-    const user = await t.createUser('mentor');
-    const broken = { send: async () => Promise.reject(new Error('smtp down')) };
-    const result = await notify(user.id, { kind: 'test', title: 'T', body: 'B' }, broken);
-    expect(result.mailed).toBe(false);
-    expect(await Notification.count({ where: { userId: user.id } })).toBe(1);
+  it('when the notice is for a deactivated account or asks for no e-mail, then only the notice is stored', async () => {
+    const gone = await t.createUser('mentor', { active: false });
+    const quiet = await t.createUser('mentor');
+    expect((await notify(gone.id, { kind: 'test', title: 'T', body: 'B' })).mailId).toBeNull();
+    expect((await notify(quiet.id, { kind: 'test', title: 'T', body: 'B' }, { email: false })).mailId).toBeNull();
+    expect(await Notification.count({ where: { userId: [gone.id, quiet.id] } })).toBe(2);
+    expect(await OutboxMessage.count({ where: { to: [gone.email, quiet.email] } })).toBe(0);
   });
 
   it('when notices are read one by one or all at once, then the unread count falls to zero; newest come first', async () => {
     const { agent, user } = await t.signIn('apprentice');
-    for (const title of ['first', 'second', 'third']) await notify(user.id, { kind: 'test', title, body: '' }, null);
+    for (const title of ['first', 'second', 'third']) await notify(user.id, { kind: 'test', title, body: '' });
     const list = await agent.get('/api/notifications');
     expect(list.body.items.map((n: { title: string }) => n.title)).toEqual(['third', 'second', 'first']);
     const one = await agent.post(`/api/notifications/${list.body.items[0].id}/read`);
@@ -58,7 +55,7 @@ describe('notifications', () => {
 
   it('when someone marks another person’s notice, then it answers 404 and leaves it unread; nobody signed in gets 401', async () => {
     const owner = await t.createUser('apprentice');
-    const { notificationId } = await notify(owner.id, { kind: 'test', title: 'Private', body: '' }, null);
+    const { notificationId } = await notify(owner.id, { kind: 'test', title: 'Private', body: '' });
     const other = (await t.signIn('mentor')).agent;
     expect((await other.post(`/api/notifications/${notificationId}/read`)).status).toBe(404);
     expect((await Notification.findByPk(notificationId!))!.readAt).toBeNull();

@@ -50,7 +50,7 @@ describe('reviews', () => {
       [2, uploadIds[0], 0, 1, 'Chamfer heavy at the edge'],
     ]);
     expect((await Submission.findByPk(id))!.status).toBe('rework');
-    const mail = t.outbox.filter((m) => m.to === apprentice.user.email);
+    const mail = (await t.deliverMail()).filter((m) => m.to === apprentice.user.email);
     expect(mail).toHaveLength(1);
     expect(mail[0].subject).toMatch(/needs rework/);
     expect(mail[0].text).toContain('2 pins');

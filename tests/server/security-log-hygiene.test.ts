@@ -15,8 +15,8 @@ const sidValues = (setCookie: string[] | string | undefined) =>
   [setCookie ?? []].flat().flatMap((c) => /tickwright\.sid=([^;]+)/.exec(c)?.[1] ?? []);
 
 async function mailAfter(before: number, to: string) {
-  return vi.waitFor(() => {
-    const found = t.outbox.slice(before).find((m) => m.to === to);
+  return vi.waitFor(async () => {
+    const found = (await t.deliverMail()).slice(before).find((m) => m.to === to);
     if (!found) throw new Error('no mail yet');
     return found;
   });
@@ -39,7 +39,7 @@ describe('log hygiene', { timeout: 60_000 }, () => {
     expect((await agent.get('/api/auth/me')).status).toBe(200);
 
     // A reset: the e-mailed link opened as a page, checked, then used.
-    let before = t.outbox.length;
+    let before = (await t.deliverMail()).length;
     expect((await t.anon().post('/api/auth/password-reset').send({ email: user.email })).status).toBe(202);
     const resetToken = /\/reset-password\/([A-Za-z0-9_-]+)/.exec((await mailAfter(before, user.email)).text)![1];
     secrets.push(resetToken);
@@ -58,7 +58,7 @@ describe('log hygiene', { timeout: 60_000 }, () => {
     const admin = await t.signIn('admin');
     const cls = await makeClass();
     const invitee = 'newcomer-log@example.test';
-    before = t.outbox.length;
+    before = (await t.deliverMail()).length;
     const invited = await admin.agent.post(`/api/classes/${cls.id}/invitations`).send({ emails: [invitee] });
     expect(invited.status).toBe(200);
     const invitationToken = tokenFromMail((await mailAfter(before, invitee)).text);

@@ -50,7 +50,7 @@ describe('submissions', () => {
     expect(await SubmissionPhoto.count({ where: { versionId: sent.body.versions[0].id } })).toBe(2);
     expect((await Upload.findByPk(a))!.claimedAt).toBeInstanceOf(Date);
 
-    const mail = t.outbox.filter((m) => m.to === mentor.user.email);
+    const mail = (await t.deliverMail()).filter((m) => m.to === mentor.user.email);
     expect(mail).toHaveLength(1);
     expect(mail[0].subject).toContain(user.name);
     expect(mail[0].text).toContain(`http://localhost:3000/review/${id}`);

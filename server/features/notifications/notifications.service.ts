@@ -43,7 +43,10 @@ export async function notify(userId: number, notice: Notice, options: NotifyOpti
       '',
       '— Tickwright',
     ].join('\n');
-    const mail = await queueMail({ to: user.email, subject: notice.title, text }, { kind: 'notification', transaction });
+    const mail = await queueMail(
+      { to: user.email, subject: notice.title, text },
+      { kind: 'notification', transaction },
+    );
     return { notificationId: row.id, mailId: mail.id };
   });
 }

@@ -11,6 +11,7 @@ import { hashPassword } from '../../../server/features/auth/passwords';
 import { User } from '../../../server/features/auth/user.model';
 import { createLogger } from '../../../server/lib/logger';
 import { createMailer } from '../../../server/lib/mailer';
+import { createOutboxWorker } from '../../../server/features/outbox/outbox-worker';
 
 export const TEST_PASSWORD = 'correct-horse-battery';
 export const ORIGIN = 'http://localhost:3000';
@@ -23,8 +24,9 @@ export interface SentMail {
 }
 
 /**
- * A fresh app over a fresh, migrated SQLite file in a temporary folder (content/ synced). Mail goes to nodemailer's
- * JSON test transport and is collected in `outbox`. With `logLines`, every line the app logs is pushed there.
+ * A fresh app over a fresh, migrated SQLite file in a temporary folder (content/ synced). E-mail waits in the outbox
+ * table until a test calls `deliverMail()`, which runs one pass of the outbox worker: delivered mail goes to nodemailer's
+ * JSON test transport and is collected in `sent`. With `logLines`, every line the app logs is pushed there.
  */
 export async function createTestApp(env: Record<string, string> = {}, options: { logLines?: string[] } = {}) {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'tickwright-test-'));
@@ -38,16 +40,22 @@ export async function createTestApp(env: Record<string, string> = {}, options: {
   const { logLines } = options;
   const logger = createLogger(config, logLines ? { write: (line: string) => void logLines.push(line) } : undefined);
   const { sequelize } = await openAndMigrate(config);
-  const outbox: SentMail[] = [];
+  const sent: SentMail[] = [];
   const transport = nodemailer.createTransport({ jsonTransport: true });
-  transport.on('idle', () => undefined);
   const mailer = createMailer(config, transport);
   const send = mailer.send;
   mailer.send = async (mail) => {
     await send(mail);
-    outbox.push({ to: mail.to, subject: mail.subject, text: mail.text });
+    sent.push({ to: mail.to, subject: mail.subject, text: mail.text });
   };
-  const app = createApp({ sequelize, config, logger, mailer });
+  const outboxWorker = createOutboxWorker({ mailer, logger });
+  const app = createApp({ sequelize, config, logger });
+
+  /** Delivers whatever the outbox holds that is due, then returns everything delivered so far. */
+  async function deliverMail() {
+    await outboxWorker.deliverDue();
+    return sent;
+  }
 
   async function createUser(role: Role, fields: Partial<{ name: string; email: string; active: boolean }> = {}) {
     hash ??= hashPassword(TEST_PASSWORD);
@@ -83,7 +91,9 @@ export async function createTestApp(env: Record<string, string> = {}, options: {
     sequelize,
     config,
     dataDir,
-    outbox,
+    sent,
+    mailer,
+    deliverMail,
     createUser,
     signIn,
     close,

@@ -57,8 +57,7 @@ export function useImportRoster(classId: number) {
 export function useResendInvitation() {
   const invalidate = useInvalidateClasses();
   return useMutation({
-    mutationFn: (id: number) =>
-      api(`/invitations/${id}/resend`, { method: 'POST', schema: ResendReply }),
+    mutationFn: (id: number) => api(`/invitations/${id}/resend`, { method: 'POST', schema: ResendReply }),
     onSuccess: invalidate,
   });
 }
