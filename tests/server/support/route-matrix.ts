@@ -183,6 +183,9 @@ export const ROUTE_MATRIX: Record<string, RouteCase> = {
     last: true,
   },
   'GET /api/audit': { url: () => '/api/audit', expect: adminOnly(200) },
+  'GET /api/outbox': { url: () => '/api/outbox?state=failed', expect: adminOnly(200) },
+  // Only the guild office may resend; a message that does not exist is 404 even to it.
+  'POST /api/outbox/:id/resend': { url: () => '/api/outbox/999999/resend', expect: adminOnly(404) },
 
   'POST /api/uploads': { url: () => '/api/uploads', attach: jpeg, expect: apprentices(201) },
   'GET /api/uploads/usage': { url: () => '/api/uploads/usage', expect: signedIn(200) },
