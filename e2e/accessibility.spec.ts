@@ -115,6 +115,7 @@ test('when the guild office goes through its pages and a class, then axe finds n
     '/guild-office/people',
     '/guild-office/invitations',
     '/guild-office/activity',
+    '/guild-office/mail',
     '/account',
     '/calculators',
   ]);

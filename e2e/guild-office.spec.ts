@@ -80,4 +80,11 @@ test('when the admin enrols a class from a roster file, then four invitees are m
   const roster = page.getByRole('table', { name: 'Roster' });
   await expect(roster.getByRole('row').filter({ hasText: 'Tamsin Quarrell' })).toContainText('Active');
   await expect(roster.getByText('Invited')).toHaveCount(3);
+
+  // The office sees each invitation's e-mail leave the outbox.
+  await page.getByRole('link', { name: 'Outgoing mail' }).click();
+  await expect(page.getByRole('heading', { name: 'Outgoing mail' })).toBeVisible();
+  const jagoRow = page.getByRole('row').filter({ hasText: good[1] });
+  await expect(jagoRow).toContainText(`Your invitation to ${className} on Tickwright`);
+  await expect(jagoRow).toContainText('Sent');
 });

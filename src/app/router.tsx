@@ -53,6 +53,7 @@ export const router = createBrowserRouter([
       { path: 'guild-office/people', lazy: () => import('./routes/guild-office/people') },
       { path: 'guild-office/invitations', lazy: () => import('./routes/guild-office/invitations') },
       { path: 'guild-office/activity', lazy: () => import('./routes/guild-office/activity') },
+      { path: 'guild-office/mail', lazy: () => import('./routes/guild-office/mail') },
       { path: 'classes', lazy: () => import('./routes/classes/classes') },
       { path: 'classes/:id', lazy: () => import('./routes/classes/class') },
       { path: 'pieces', lazy: () => import('./routes/pieces/my-pieces') },

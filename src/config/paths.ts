@@ -27,5 +27,6 @@ export const paths = {
   people: '/guild-office/people',
   invitations: '/guild-office/invitations',
   activity: '/guild-office/activity',
+  outgoingMail: '/guild-office/mail',
   acceptInvitation: (token: string) => `/invitation/${token}`,
 } as const;

@@ -7,6 +7,7 @@ const TABS = [
   { to: paths.people, label: 'People' },
   { to: paths.invitations, label: 'Invitations' },
   { to: paths.activity, label: 'Activity' },
+  { to: paths.outgoingMail, label: 'Outgoing mail' },
 ];
 
 /** The guild office's own sections, with the development inbox beside them while mail stays local. */
