@@ -8,6 +8,7 @@ import { startDevMailServer } from './lib/dev-mail';
 import { createLogger } from './lib/logger';
 import { createMailer } from './lib/mailer';
 import { createOutboxWorker } from './features/outbox/outbox-worker';
+import { forgetOldKeys } from './features/idempotency/idempotent';
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, '..', 'dist');
 
@@ -26,6 +27,11 @@ const mailer = createMailer(config);
 // Whatever was still queued when the server last stopped goes out now.
 const outbox = createOutboxWorker({ mailer, logger });
 outbox.start();
+// Idempotency keys are kept a day; clearing them hourly keeps the table small.
+setInterval(
+  () => forgetOldKeys().catch((err: Error) => logger.warn({ err }, 'old idempotency keys not cleared')),
+  3600_000,
+).unref();
 const app = createApp({
   sequelize,
   config,

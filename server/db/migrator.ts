@@ -8,6 +8,7 @@ import * as m0005 from './migrations/0005-submissions';
 import * as m0006 from './migrations/0006-bench-log';
 import * as m0007 from './migrations/0007-invitations-audit';
 import * as m0008 from './migrations/0008-outbox';
+import * as m0009 from './migrations/0009-idempotency-keys';
 
 export type Migration = {
   up: (ctx: { context: QueryInterface }) => Promise<void>;
@@ -24,6 +25,7 @@ const migrations: Record<string, Migration> = {
   '0006-bench-log': m0006,
   '0007-invitations-audit': m0007,
   '0008-outbox': m0008,
+  '0009-idempotency-keys': m0009,
 };
 
 export function createMigrator(sequelize: Sequelize) {

@@ -10,6 +10,7 @@ import { initInvitationModel } from '../features/classes/invitation.model';
 import { initCourseModels } from '../features/courses/course.model';
 import { Notification } from '../features/notifications/notification.model';
 import { OutboxMessage } from '../features/outbox/outbox-message.model';
+import { IdempotencyKey } from '../features/idempotency/idempotency-key.model';
 import { initReviewModels } from '../features/reviews/review.model';
 import { initSubmissionModels } from '../features/submissions/submission.model';
 import { Upload } from '../features/uploads/upload.model';
@@ -32,4 +33,5 @@ export function initModels(sequelize: Sequelize) {
   initAuditModel(sequelize);
   initBenchLogModels(sequelize);
   OutboxMessage.initModel(sequelize);
+  IdempotencyKey.initModel(sequelize);
 }

@@ -14,6 +14,7 @@ import type { AppDeps } from '../../app';
 import { AppError } from '../../lib/app-error';
 import { idParam, parseBody, parseQuery } from '../../lib/validate';
 import { currentUser, requireAuth, requireRole } from '../auth/guards';
+import { idempotent } from '../idempotency/idempotent';
 import { notify } from '../notifications/notifications.service';
 import { csvFileName, entriesCsv } from './log-export';
 import { allEntries, createEntry, deleteEntry, getEntry, listEntries, updateEntry } from './log-entries.service';
@@ -47,7 +48,7 @@ export function logEntriesRouter({ sequelize, config }: AppDeps) {
   router.use(requireAuth);
   const apprentice = requireRole('apprentice');
 
-  router.post('/', apprentice, async (req, res) => {
+  router.post('/', apprentice, idempotent, async (req, res) => {
     const input = parseEntryBody(LogEntryCreateInput, req);
     res.status(201).json(await createEntry(sequelize, currentUser(req), input));
   });

@@ -5,6 +5,7 @@ import { ReviewInput, ReviewQueueQuery } from '@shared/schemas/review';
 import type { AppDeps } from '../../app';
 import { idParam, parseBody, parseQuery } from '../../lib/validate';
 import { currentUser, requireAuth, requireRole } from '../auth/guards';
+import { idempotent } from '../idempotency/idempotent';
 import { notify } from '../notifications/notifications.service';
 import { paths } from '../submissions/links';
 import { queueCount, queueFilters, reviewQueue } from './review-queue.service';
@@ -34,7 +35,7 @@ export function reviewsRouter({ sequelize, config }: AppDeps) {
     res.json({ items: await recentReviews(sequelize, currentUser(req), limit) });
   });
 
-  router.post('/submissions/:id/reviews', reviewer, async (req, res) => {
+  router.post('/submissions/:id/reviews', reviewer, idempotent, async (req, res) => {
     const mentor = currentUser(req);
     const input = parseBody(ReviewInput, req);
     // The review and the apprentice's notice (with its e-mail in the outbox) are stored together or not at all.

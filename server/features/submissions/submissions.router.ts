@@ -3,6 +3,7 @@ import { SubmissionCreateInput, SubmissionDraftPatch, SubmissionListQuery } from
 import type { AppDeps } from '../../app';
 import { idParam, parseBody, parseQuery } from '../../lib/validate';
 import { currentUser, requireAuth, requireRole } from '../auth/guards';
+import { idempotent } from '../idempotency/idempotent';
 import { mentorsOfApprentice } from '../classes/access';
 import { notify } from '../notifications/notifications.service';
 import { linkOptions } from './linked-records';
@@ -32,7 +33,7 @@ export function submissionsRouter({ sequelize, config }: AppDeps) {
     res.json(await projectForPiece(sequelize, currentUser(req), idParam(req, 'projectId')));
   });
 
-  router.post('/', apprentice, async (req, res) => {
+  router.post('/', apprentice, idempotent, async (req, res) => {
     res.status(201).json(await createSubmission(sequelize, currentUser(req), parseBody(SubmissionCreateInput, req)));
   });
 

@@ -5,6 +5,7 @@ import type { AppDeps } from '../../app';
 import { AppError } from '../../lib/app-error';
 import { idParam, parseQuery } from '../../lib/validate';
 import { currentUser, requireAuth, requireRole } from '../auth/guards';
+import { idempotent } from '../idempotency/idempotent';
 import { uploadFile } from './upload-files';
 import { findViewableUpload, storageUsed, storeUpload, sweepNowAndThen } from './uploads.service';
 
@@ -17,7 +18,7 @@ const receive = multer({
 export function uploadsRouter({ sequelize, config, logger }: AppDeps) {
   const router = Router();
 
-  router.post('/', requireRole('apprentice'), receive.single('file'), async (req, res) => {
+  router.post('/', requireRole('apprentice'), idempotent, receive.single('file'), async (req, res) => {
     if (!req.file) throw AppError.badRequest('Choose a photo to upload.', { file: ['Choose a photo to upload.'] });
     const upload = await storeUpload(config.dataDir, currentUser(req).id, req.file.buffer, config.uploadQuotaBytes);
     sweepNowAndThen(sequelize, config.dataDir, (err) => logger.warn({ err }, 'sweep of abandoned uploads failed'));
