@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
+import { mkdir, readdir, rename, rm, stat, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { UPLOAD_SIZES, type UploadSize } from '@shared/schemas/upload';
 
@@ -27,4 +27,19 @@ export async function writeUploadFiles(dataDir: string, fileKey: string, files: 
 
 export async function removeUploadFiles(dataDir: string, fileKey: string) {
   await Promise.all(UPLOAD_SIZES.map((size) => rm(uploadFile(dataDir, fileKey, size), { force: true })));
+}
+
+/** Every file in the uploads folder older than `olderThanMs`, with the upload key its name starts with. */
+export async function oldUploadFiles(dataDir: string, olderThanMs: number) {
+  const dir = uploadsDir(dataDir);
+  const names = await readdir(dir).catch(() => [] as string[]);
+  const cutoff = Date.now() - olderThanMs;
+  const old: { file: string; fileKey: string; temporary: boolean }[] = [];
+  for (const name of names) {
+    const file = path.join(dir, name);
+    const info = await stat(file).catch(() => null);
+    if (!info?.isFile() || info.mtimeMs >= cutoff) continue;
+    old.push({ file, fileKey: name.split('-')[0], temporary: name.endsWith('.tmp') });
+  }
+  return old;
 }

@@ -4,7 +4,8 @@ import type { UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
 import { canSeeUpload } from '../classes/access';
 import { processImage } from './image-pipeline';
-import { newFileKey, removeUploadFiles, writeUploadFiles } from './upload-files';
+import { newFileKey, oldUploadFiles, removeUploadFiles, writeUploadFiles } from './upload-files';
+import { rm } from 'node:fs/promises';
 import { Upload } from './upload.model';
 import { withImageSlot } from './image-slots';
 
@@ -149,4 +150,25 @@ export function sweepNowAndThen(sequelize: Sequelize, dataDir: string, onError: 
   if (Date.now() - lastSweep < 60 * 60 * 1000) return;
   lastSweep = Date.now();
   sweepAbandonedUploads(sequelize, dataDir).catch(onError);
+}
+
+const HOUR_MS = 3600 * 1000;
+
+/**
+ * Run at start-up: removes photo files that no row owns, left by a process killed between writing the files and
+ * committing the row (or mid-write, as temporary files). Only files older than an hour, so that an upload being
+ * stored by another process at this moment is never touched.
+ */
+export async function sweepOrphanFiles(dataDir: string, olderThanMs = HOUR_MS): Promise<number> {
+  const old = await oldUploadFiles(dataDir, olderThanMs);
+  if (old.length === 0) return 0;
+  const keys = [...new Set(old.map((f) => f.fileKey))];
+  const owned = new Set<string>();
+  for (let i = 0; i < keys.length; i += 500) {
+    const rows = await Upload.findAll({ where: { fileKey: keys.slice(i, i + 500) }, attributes: ['fileKey'] });
+    for (const row of rows) owned.add(row.fileKey);
+  }
+  const orphans = old.filter((f) => f.temporary || !owned.has(f.fileKey));
+  await Promise.all(orphans.map((f) => rm(f.file, { force: true })));
+  return orphans.length;
 }
