@@ -20,6 +20,5 @@ export async function openDatabase(dataDir: string): Promise<Sequelize> {
   });
   queueWrites(sequelize, BUSY_TIMEOUT_MS);
   await sequelize.query('PRAGMA journal_mode = WAL;');
-  await sequelize.query('PRAGMA synchronous = NORMAL;');
   return sequelize;
 }

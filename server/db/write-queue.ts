@@ -19,7 +19,7 @@ import type sqlite3 from 'sqlite3';
 export function queueWrites(sequelize: Sequelize, busyTimeoutMs: number): void {
   const lock = new Mutex();
   const current = new AsyncLocalStorage<Transaction>();
-  shareOneWriterConnection(sequelize, busyTimeoutMs);
+  oneWriterFewReaders(sequelize, busyTimeoutMs);
 
   const begin = sequelize.transaction.bind(sequelize) as (options: unknown, run?: unknown) => Promise<Transaction>;
   sequelize.transaction = (async (
@@ -92,20 +92,28 @@ type Manager = {
 
 /**
  * Sequelize opens a new SQLite connection for every transaction. With transactions queued one at a time, a single
- * writer connection serves them all; both connections wait (briefly) when another process holds the lock.
+ * writer connection serves them all. Everything else is spread over a few reader connections: one connection runs
+ * one statement at a time, so a single shared one would make every signed-in request queue behind every other.
+ * All of them wait (briefly) when another process holds the lock.
  */
-function shareOneWriterConnection(sequelize: Sequelize, busyTimeoutMs: number) {
+const READERS = 3;
+
+function oneWriterFewReaders(sequelize: Sequelize, busyTimeoutMs: number) {
   const manager = sequelize.connectionManager as unknown as Manager;
   const open = manager.getConnection.bind(manager);
   const release = manager.releaseConnection.bind(manager);
   const configured = new WeakSet<sqlite3.Database>();
   const WRITER = 'writer';
 
+  let turn = 0;
   manager.getConnection = async (options) => {
-    const uuid = options?.uuid && options.uuid !== 'default' ? WRITER : 'default';
+    turn = (turn + 1) % READERS;
+    const uuid = options?.uuid && options.uuid !== 'default' ? WRITER : `reader-${turn}`;
     const connection = await open({ ...options, uuid });
     if (!configured.has(connection)) {
       connection.configure('busyTimeout', busyTimeoutMs);
+      // Per connection: with WAL, a commit is durable at the next checkpoint, which is safe against crashes.
+      connection.run('PRAGMA synchronous = NORMAL');
       configured.add(connection);
     }
     return connection;
