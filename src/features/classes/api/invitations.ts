@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { InvitationListReply, InviteReply, RosterPreviewReply, type RosterRow } from '@shared/schemas/invitation';
 import { api } from '@/lib/api-client';
 import { classKeys } from './class-keys';
