@@ -1,5 +1,6 @@
 import { execSync } from 'node:child_process';
 import { runBundleBudget } from './bundle-budget';
+import { runLighthouseBench } from './lighthouse';
 import { runQueueBench } from './queue';
 import { runTrainSearchBench } from './train-search';
 import { runUploadBench } from './uploads';
@@ -7,4 +8,5 @@ import { runUploadBench } from './uploads';
 /** `npm run bench`: speed and size targets, measured by scripts rather than timed unit tests. */
 execSync('npx vite build --logLevel warn', { stdio: 'inherit' });
 const results = [runBundleBudget(), runTrainSearchBench(), await runUploadBench(), await runQueueBench()];
+results.push(await runLighthouseBench());
 process.exitCode = results.every(Boolean) ? 0 : 1;

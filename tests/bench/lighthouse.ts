@@ -1,7 +1,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
+import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import path from 'node:path';
 import * as chromeLauncher from 'chrome-launcher';
 import lighthouse from 'lighthouse';
@@ -104,7 +104,8 @@ interface Figures {
   tbtMs: number;
 }
 
-async function audit(url: string, chromePort: number, cookie: string | undefined): Promise<Figures> {
+/** Lighthouse now and then fails to record a trace on a busy machine (NO_NAVSTART); such a run is tried once more. */
+async function audit(url: string, chromePort: number, cookie: string | undefined, tries = 2): Promise<Figures> {
   const result = await lighthouse(url, {
     port: chromePort,
     output: 'json',
@@ -114,6 +115,7 @@ async function audit(url: string, chromePort: number, cookie: string | undefined
   });
   if (!result) throw new Error(`Lighthouse gave no result for ${url}`);
   const { categories, audits, runtimeError } = result.lhr;
+  if (runtimeError && tries > 1) return audit(url, chromePort, cookie, tries - 1);
   if (runtimeError) throw new Error(`Lighthouse could not load ${url}: ${runtimeError.message}`);
   return {
     performance: Math.round((categories.performance.score ?? 0) * 100),
@@ -133,7 +135,9 @@ export async function runLighthouseBench(): Promise<boolean> {
   let ok = true;
   try {
     const cookies = new Map<string, string>();
-    console.log('Lighthouse, mobile (slow 4G, 4× CPU slowdown):');
+    console.log(
+      `Lighthouse, mobile (slow 4G, 4× CPU slowdown) (load ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores):`,
+    );
     for (const page of PAGES) {
       let cookie: string | undefined;
       if (page.signedInAs) {
