@@ -1,4 +1,4 @@
-import path from 'node:path';
+import compression from 'compression';
 import express from 'express';
 import helmet from 'helmet';
 import type { Sequelize } from 'sequelize';
@@ -23,6 +23,7 @@ import { outboxRouter } from './features/outbox/outbox.router';
 import { reviewsRouter } from './features/reviews/reviews.router';
 import { submissionsRouter } from './features/submissions/submissions.router';
 import { uploadsRouter } from './features/uploads/uploads.router';
+import { clientFiles } from './lib/client-files';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import { httpLogger, type Logger } from './lib/logger';
 import { rejectBadAddress, rejectBadBody } from './lib/text-guard';
@@ -44,6 +45,8 @@ export function createApp(deps: AppDeps) {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.use(httpLogger(logger));
+  // Replies made on the fly (API JSON, index.html) above 1 KB; built files come precompressed (lib/client-files.ts).
+  app.use(compression());
   app.use(rejectBadAddress);
   app.use(
     helmet({
@@ -94,9 +97,7 @@ export function createApp(deps: AppDeps) {
   app.use('/api', api);
 
   if (deps.clientDir) {
-    const clientDir = deps.clientDir;
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+    app.use(clientFiles(deps.clientDir));
   }
   app.use(errorHandler);
   return app;

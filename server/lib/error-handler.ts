@@ -1,7 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { MulterError } from 'multer';
 import { UniqueConstraintError } from 'sequelize';
-import { ZodError, z } from 'zod';
+import * as z from 'zod/mini';
 import { AppError } from './app-error';
 
 export const apiNotFound: RequestHandler = (req, _res, next) => {
@@ -20,7 +20,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
 
 function toAppError(err: unknown): AppError {
   if (err instanceof AppError) return err;
-  if (err instanceof ZodError) {
+  if (err instanceof z.core.$ZodError) {
     const { fieldErrors, formErrors } = z.flattenError(err);
     const fields = fieldErrors as Record<string, string[]>;
     if (formErrors.length) fields._ = formErrors;

@@ -1,6 +1,6 @@
 import path from 'node:path';
 import { parseArgs } from 'node:util';
-import { CALCULATOR_NAMES } from '@shared/calc';
+import { CALCULATOR_NAMES } from '@shared/calc/names';
 import { checkContent } from '../features/courses/content-check';
 
 /** `npm run content:check -- --dir <folder>`: prints `file:line: problem` and exits 1 when anything is wrong. */

@@ -6,13 +6,11 @@ import { pivotBurnish } from './pivot-burnish';
 import { planting } from './planting';
 import { springTemper } from './spring-temper';
 import { trainPendulum } from './train-pendulum';
+import type { CalculatorName } from './names';
 import type { Calculator } from './types';
 import { wheelPinion } from './wheel-pinion';
 
-/**
- * Every bench calculator, keyed by the name used in URLs, lesson directives and saved results. The key order is the
- * order of the calculators index: the bench sequence of PRODUCT.md.
- */
+/** Every bench calculator, keyed by its name (names.ts holds the names and their order). */
 export const calculators = {
   'broach-taper': broachTaper,
   'pivot-burnish': pivotBurnish,
@@ -22,18 +20,10 @@ export const calculators = {
   fusee,
   dividing,
   planting,
-} as const;
-
-export type CalculatorName = keyof typeof calculators;
+} as const satisfies Record<CalculatorName, unknown>;
 
 /** A calculator seen without its own input and result types, for code that handles any of them by name. */
 export type AnyCalculator = Calculator<z.ZodType, unknown>;
-
-export const CALCULATOR_NAMES = Object.keys(calculators) as CalculatorName[];
-
-export function isCalculatorName(name: string): name is CalculatorName {
-  return Object.hasOwn(calculators, name);
-}
 
 export function calculatorByName(name: CalculatorName): AnyCalculator {
   return calculators[name] as AnyCalculator;

@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import { emptyAsAbsent, QueryInt, QueryPage } from './query';
 
 /** Every action the audit log records; the admin filters by these. */
 export const AUDIT_ACTIONS = [
@@ -26,11 +27,11 @@ export const AuditTargetType = z.enum(['class', 'invitation', 'user', 'enrolment
 export type AuditTargetType = z.infer<typeof AuditTargetType>;
 
 export const AuditEventDTO = z.object({
-  id: z.number().int(),
-  actor: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+  id: z.int(),
+  actor: z.nullable(z.object({ id: z.int(), name: z.string() })),
   action: AuditAction,
   targetType: AuditTargetType,
-  targetId: z.number().int(),
+  targetId: z.int(),
   /** A readable name for the target as it was at the time (a class name, an e-mail address). */
   targetLabel: z.string(),
   details: z.record(z.string(), z.unknown()),
@@ -39,15 +40,13 @@ export const AuditEventDTO = z.object({
 export type AuditEventDTO = z.infer<typeof AuditEventDTO>;
 
 const Day = z.iso.date('Enter a date as YYYY-MM-DD.');
-/** Filter fields left empty in a form arrive as `?actor=`: treated as not given. */
-const optional = <S extends z.ZodType>(schema: S) => z.preprocess((v) => (v === '' ? undefined : v), schema.optional());
 
 export const AuditQuery = z.object({
-  actor: optional(z.coerce.number().int().positive()),
-  action: optional(AuditAction),
-  from: optional(Day),
-  to: optional(Day),
-  page: z.coerce.number().int().min(1).max(10_000).default(1),
+  actor: emptyAsAbsent(QueryInt(1, Number.MAX_SAFE_INTEGER)),
+  action: emptyAsAbsent(AuditAction),
+  from: emptyAsAbsent(Day),
+  to: emptyAsAbsent(Day),
+  page: QueryPage(10_000),
 });
 export type AuditQuery = z.infer<typeof AuditQuery>;
 
@@ -55,10 +54,10 @@ export const AUDIT_PAGE_SIZE = 50;
 
 export const AuditPage = z.object({
   events: z.array(AuditEventDTO),
-  page: z.number().int(),
-  pageSize: z.number().int(),
-  total: z.number().int(),
+  page: z.int(),
+  pageSize: z.int(),
+  total: z.int(),
   /** Everyone who appears as an actor, for the filter. */
-  actors: z.array(z.object({ id: z.number().int(), name: z.string() })),
+  actors: z.array(z.object({ id: z.int(), name: z.string() })),
 });
 export type AuditPage = z.infer<typeof AuditPage>;

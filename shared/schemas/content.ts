@@ -1,39 +1,40 @@
-import { z } from 'zod';
+import * as z from 'zod/mini';
 
 /** The front matter of content/<course>/course.md and NN-slug.md lesson files; content:check and the sync use it. */
-const Key = z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'use kebab-case (a-z, 0-9 and dashes)');
+const Key = z.string().check(z.regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'use kebab-case (a-z, 0-9 and dashes)'));
+const Text = z.string().check(z.minLength(1));
 
-export const Skill = z.object({ key: Key, label: z.string().min(1) });
+export const Skill = z.object({ key: Key, label: Text });
 export type Skill = z.infer<typeof Skill>;
 
 export const ProjectCriterion = z.object({
   key: Key,
-  label: z.string().min(1),
-  weight: z.number().int().positive(),
+  label: Text,
+  weight: z.int().check(z.positive()),
   /** What a score of 0, 1, 2, 3 and 4 means for this criterion. */
-  scores: z.array(z.string().min(1)).length(5),
+  scores: z.array(Text).check(z.length(5)),
 });
 export type ProjectCriterion = z.infer<typeof ProjectCriterion>;
 
 export const ProjectSpec = z.object({
-  title: z.string().min(1),
-  brief: z.string().min(1),
-  passMark: z.number().min(0).max(4),
-  criteria: z
-    .array(ProjectCriterion)
-    .min(3)
-    .max(5)
-    .refine((c) => new Set(c.map((x) => x.key)).size === c.length, 'criterion keys must be unique'),
+  title: Text,
+  brief: Text,
+  passMark: z.number().check(z.gte(0), z.lte(4)),
+  criteria: z.array(ProjectCriterion).check(
+    z.minLength(3),
+    z.maxLength(5),
+    z.refine((c) => new Set(c.map((x) => x.key)).size === c.length, 'criterion keys must be unique'),
+  ),
 });
 export type ProjectSpec = z.infer<typeof ProjectSpec>;
 
 export const CourseFrontMatter = z.object({
-  title: z.string().min(1),
+  title: Text,
   slug: Key,
-  summary: z.string().min(1),
+  summary: Text,
   level: z.enum(['foundation', 'intermediate', 'advanced']),
-  order: z.number().int().nonnegative(),
-  skills: z.array(Skill).min(1),
+  order: z.int().check(z.nonnegative()),
+  skills: z.array(Skill).check(z.minLength(1)),
 });
 export type CourseFrontMatter = z.infer<typeof CourseFrontMatter>;
 
@@ -52,16 +53,16 @@ export const CalculatorExample = z.object({
    */
   shows: z
     .record(z.string(), z.union([z.string(), z.number(), z.boolean()]))
-    .refine((o) => Object.keys(o).length > 0, 'name at least one figure the lesson shows'),
+    .check(z.refine((o) => Object.keys(o).length > 0, 'name at least one figure the lesson shows')),
 });
 export type CalculatorExample = z.infer<typeof CalculatorExample>;
 
 export const LessonFrontMatter = z.object({
-  title: z.string().min(1),
-  minutes: z.number().int().min(1).max(600),
-  skills: z.array(Key).default([]),
-  project: ProjectSpec.optional(),
-  calculatorExamples: z.array(CalculatorExample).default([]),
+  title: Text,
+  minutes: z.int().check(z.gte(1), z.lte(600)),
+  skills: z._default(z.array(Key), []),
+  project: z.optional(ProjectSpec),
+  calculatorExamples: z._default(z.array(CalculatorExample), []),
 });
 export type LessonFrontMatter = z.infer<typeof LessonFrontMatter>;
 

@@ -1,8 +1,8 @@
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { ProjectCriterion, Skill } from './content';
 
 /** Replies of the courses, lessons and search API; the client parses every reply with these. */
-const Id = z.number().int();
+const Id = z.int();
 export const CourseLevel = z.enum(['foundation', 'intermediate', 'advanced']);
 export type CourseLevel = z.infer<typeof CourseLevel>;
 
@@ -12,11 +12,11 @@ export const CourseCard = z.object({
   title: z.string(),
   summary: z.string(),
   level: CourseLevel,
-  lessonCount: z.number().int(),
-  minutes: z.number().int(),
+  lessonCount: z.int(),
+  minutes: z.int(),
   /** Only for apprentices: how many of the course's lessons they have marked done, and that as a fraction 0..1. */
-  lessonsDone: z.number().int().nullable(),
-  progress: z.number().min(0).max(1).nullable(),
+  lessonsDone: z.nullable(z.int()),
+  progress: z.nullable(z.number().check(z.gte(0), z.lte(1))),
 });
 export type CourseCard = z.infer<typeof CourseCard>;
 
@@ -28,26 +28,26 @@ const ProjectBadge = z.object({ id: Id, title: z.string() });
 export const LessonListItem = z.object({
   id: Id,
   slug: z.string(),
-  position: z.number().int(),
+  position: z.int(),
   title: z.string(),
-  minutes: z.number().int(),
+  minutes: z.int(),
   skills: z.array(Skill),
   /** null for mentors and the admin, who do not keep progress. */
-  done: z.boolean().nullable(),
-  project: ProjectBadge.nullable(),
+  done: z.nullable(z.boolean()),
+  project: z.nullable(ProjectBadge),
 });
 export type LessonListItem = z.infer<typeof LessonListItem>;
 
 export const CourseDetailReply = z.object({
-  course: CourseCard.extend({ intro: z.string(), skills: z.array(Skill) }),
+  course: z.extend(CourseCard, { intro: z.string(), skills: z.array(Skill) }),
   lessons: z.array(LessonListItem),
 });
 export type CourseDetailReply = z.infer<typeof CourseDetailReply>;
 
-export const OutlineHeading = z.object({ depth: z.number().int(), text: z.string(), id: z.string() });
+export const OutlineHeading = z.object({ depth: z.int(), text: z.string(), id: z.string() });
 export type OutlineHeading = z.infer<typeof OutlineHeading>;
 
-export const ProjectDTO = ProjectBadge.extend({
+export const ProjectDTO = z.extend(ProjectBadge, {
   brief: z.string(),
   passMark: z.number(),
   criteria: z.array(ProjectCriterion),
@@ -59,32 +59,38 @@ const CourseRef = z.object({ id: Id, slug: z.string(), title: z.string() });
 
 export const LessonReply = z.object({
   course: CourseRef,
-  lesson: LessonListItem.omit({ project: true }).extend({ body: z.string(), outline: z.array(OutlineHeading) }),
-  previous: LessonLink.nullable(),
-  next: LessonLink.nullable(),
-  project: ProjectDTO.nullable(),
+  lesson: z.extend(z.omit(LessonListItem, { project: true }), { body: z.string(), outline: z.array(OutlineHeading) }),
+  previous: z.nullable(LessonLink),
+  next: z.nullable(LessonLink),
+  project: z.nullable(ProjectDTO),
 });
 export type LessonReply = z.infer<typeof LessonReply>;
 
 /** A lesson's basics by id, for features that point at a lesson (submissions, log entries); retired ones too. */
 export const LessonBasicsReply = z.object({
-  lesson: z.object({ id: Id, slug: z.string(), title: z.string(), position: z.number().int(), retired: z.boolean() }),
+  lesson: z.object({ id: Id, slug: z.string(), title: z.string(), position: z.int(), retired: z.boolean() }),
   course: CourseRef,
 });
 export type LessonBasicsReply = z.infer<typeof LessonBasicsReply>;
 
-export const LessonDoneReply = z.object({ lessonId: Id, done: z.boolean(), completedAt: z.iso.datetime().nullable() });
+export const LessonDoneReply = z.object({ lessonId: Id, done: z.boolean(), completedAt: z.nullable(z.iso.datetime()) });
 export type LessonDoneReply = z.infer<typeof LessonDoneReply>;
 
 /** The apprentice's next lesson: the first one not done in the course of their class; lesson null once all are done. */
 export const NextLessonReply = z.object({
-  course: CourseRef.extend({ lessonCount: z.number().int(), lessonsDone: z.number().int() }).nullable(),
-  lesson: LessonLink.extend({ minutes: z.number().int(), position: z.number().int() }).nullable(),
+  course: z.nullable(z.extend(CourseRef, { lessonCount: z.int(), lessonsDone: z.int() })),
+  lesson: z.nullable(z.extend(LessonLink, { minutes: z.int(), position: z.int() })),
 });
 export type NextLessonReply = z.infer<typeof NextLessonReply>;
 
 export const SearchQuery = z.object({
-  q: z.string().trim().min(2, 'Type at least two letters.').max(100, 'Keep the search under 100 characters.'),
+  q: z
+    .string()
+    .check(
+      z.trim(),
+      z.minLength(2, 'Type at least two letters.'),
+      z.maxLength(100, 'Keep the search under 100 characters.'),
+    ),
 });
 export type SearchQuery = z.infer<typeof SearchQuery>;
 

@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import { QueryId, QueryInt, QueryPage } from './query';
 import { CalculationDTO } from './calculation';
 import { UploadDTO } from './upload';
 
@@ -8,7 +9,7 @@ export const LOG_PAGE_SIZE = 20;
 export const MAX_LOG_PHOTOS = 12;
 export const MAX_MEASUREMENTS = 40;
 
-const Id = z.number().int().positive();
+const Id = z.int().check(z.positive());
 
 /** Today's calendar date in the local time zone of whoever runs this code, as YYYY-MM-DD. */
 export function localToday(now = new Date()): string {
@@ -35,85 +36,101 @@ const latestLogYear = () => new Date().getFullYear() + 1;
 // NaN (a malformed date, already refused by the pattern) compares false, so these add no second message for it.
 const yearOf = (d: string) => Number(d.slice(0, 4));
 
-export const LogDate = z
-  .string()
-  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2026-10-05.')
-  .refine(isCalendarDate, 'That date is not on the calendar.')
-  .refine((d) => !(yearOf(d) < EARLIEST_LOG_YEAR), `Use a date from ${EARLIEST_LOG_YEAR} on.`)
-  .refine((d) => !(yearOf(d) > latestLogYear()), 'Use a date no later than next year.');
+export const LogDate = z.string().check(
+  z.regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2026-10-05.'),
+  z.refine(isCalendarDate, 'That date is not on the calendar.'),
+  z.refine((d) => !(yearOf(d) < EARLIEST_LOG_YEAR), `Use a date from ${EARLIEST_LOG_YEAR} on.`),
+  z.refine((d) => !(yearOf(d) > latestLogYear()), 'Use a date no later than next year.'),
+);
 
 /**
  * "Not in the future" is judged by the clock of the code that parses: on the server that is the server's local time
  * zone, which is the one that counts. The guild runs one server for one workshop, so its local date is the bench's
  * date; an apprentice far ahead of it may have to wait a few hours to log "today".
  */
-const EntryDate = LogDate.refine((d) => d <= localToday(), 'The date cannot be in the future.');
+const EntryDate = LogDate.check(z.refine((d) => d <= localToday(), 'The date cannot be in the future.'));
 
 export const Minutes = z
   .number({ error: 'Enter the time spent in minutes.' })
-  .int('Use whole minutes.')
-  .min(1, 'Log at least 1 minute.')
-  .max(MAX_DAY_MINUTES, 'One date holds at most 24 h (1440 min).');
+  .check(
+    z.int('Use whole minutes.'),
+    z.gte(1, 'Log at least 1 minute.'),
+    z.lte(MAX_DAY_MINUTES, 'One date holds at most 24 h (1440 min).'),
+  );
 
 export const MeasurementInput = z.object({
-  name: z.string().trim().min(1, 'Say what was measured.').max(80, 'Keep the name under 80 characters.'),
+  name: z
+    .string()
+    .check(z.trim(), z.minLength(1, 'Say what was measured.'), z.maxLength(80, 'Keep the name under 80 characters.')),
   value: z.number({ error: 'Enter the value as a number.' }),
-  unit: z.string().trim().min(1, 'Give a unit (mm, µm, N …).').max(20, 'Keep the unit under 20 characters.'),
+  unit: z
+    .string()
+    .check(
+      z.trim(),
+      z.minLength(1, 'Give a unit (mm, µm, N …).'),
+      z.maxLength(20, 'Keep the unit under 20 characters.'),
+    ),
 });
 export type MeasurementInput = z.infer<typeof MeasurementInput>;
 
 const IdList = (what: string, max: number) =>
-  z
-    .array(Id)
-    .max(max, `Attach at most ${max} ${what}.`)
-    .refine((ids) => new Set(ids).size === ids.length, `Attach each of the ${what} once.`);
+  z.array(Id).check(
+    z.maxLength(max, `Attach at most ${max} ${what}.`),
+    z.refine((ids) => new Set(ids).size === ids.length, `Attach each of the ${what} once.`),
+  );
 
 /** Every field of an entry; a create fills the lists with empty ones, a patch leaves out what it does not change. */
 const entryFields = {
   date: EntryDate,
   minutes: Minutes,
-  title: z.string().trim().min(1, 'Give the entry a title.').max(120, 'Keep the title under 120 characters.'),
-  notes: z.string().max(20_000, 'Keep the notes under 20 000 characters.'),
-  lessonId: Id.nullable(),
-  measurements: z.array(MeasurementInput).max(MAX_MEASUREMENTS, `Record at most ${MAX_MEASUREMENTS} measurements.`),
+  title: z
+    .string()
+    .check(
+      z.trim(),
+      z.minLength(1, 'Give the entry a title.'),
+      z.maxLength(120, 'Keep the title under 120 characters.'),
+    ),
+  notes: z.string().check(z.maxLength(20_000, 'Keep the notes under 20 000 characters.')),
+  lessonId: z.nullable(Id),
+  measurements: z
+    .array(MeasurementInput)
+    .check(z.maxLength(MAX_MEASUREMENTS, `Record at most ${MAX_MEASUREMENTS} measurements.`)),
   uploadIds: IdList('photos', MAX_LOG_PHOTOS),
   calculationIds: IdList('saved results', 20),
 };
 
 export const LogEntryCreateInput = z.object({
   ...entryFields,
-  notes: entryFields.notes.default(''),
-  lessonId: entryFields.lessonId.optional(),
-  measurements: entryFields.measurements.default([]),
-  uploadIds: entryFields.uploadIds.default([]),
-  calculationIds: entryFields.calculationIds.default([]),
+  notes: z._default(entryFields.notes, ''),
+  lessonId: z.optional(entryFields.lessonId),
+  measurements: z._default(entryFields.measurements, []),
+  uploadIds: z._default(entryFields.uploadIds, []),
+  calculationIds: z._default(entryFields.calculationIds, []),
 });
 export type LogEntryCreateInput = z.infer<typeof LogEntryCreateInput>;
 
-export const LogEntryPatch = z.object(entryFields).partial();
+export const LogEntryPatch = z.partial(z.object(entryFields));
 export type LogEntryPatch = z.infer<typeof LogEntryPatch>;
-
-const ApprenticeParam = z.coerce.number().int().positive().optional();
 
 export const LogEntryFilters = z
   .object({
     /** Mentors and the guild office name the apprentice whose log they read; apprentices read their own. */
-    apprentice: ApprenticeParam,
-    from: LogDate.optional(),
-    to: LogDate.optional(),
-    lessonId: z.coerce.number().int().positive().optional(),
+    apprentice: QueryId,
+    from: z.optional(LogDate),
+    to: z.optional(LogDate),
+    lessonId: QueryId,
   })
-  .refine((q) => !q.from || !q.to || q.from <= q.to, { message: 'The range ends before it starts.', path: ['to'] });
+  .check(
+    z.refine((q) => !q.from || !q.to || q.from <= q.to, { message: 'The range ends before it starts.', path: ['to'] }),
+  );
 export type LogEntryFilters = z.infer<typeof LogEntryFilters>;
 
-export const LogEntryListQuery = LogEntryFilters.and(
-  z.object({ page: z.coerce.number().int().min(1).max(10_000).default(1) }),
-);
+export const LogEntryListQuery = z.intersection(LogEntryFilters, z.object({ page: QueryPage(10_000) }));
 export type LogEntryListQuery = z.infer<typeof LogEntryListQuery>;
 
 export const LogSummaryQuery = z.object({
-  apprentice: ApprenticeParam,
-  weeks: z.coerce.number().int().min(1).max(52).default(8),
+  apprentice: QueryId,
+  weeks: z._default(QueryInt(1, 52), 8),
 });
 export type LogSummaryQuery = z.infer<typeof LogSummaryQuery>;
 
@@ -125,27 +142,35 @@ export const GRADE_ASPECT_LABELS: Record<GradeAspect, string> = {
   photos: 'Photos',
 };
 
-const Score = z.number({ error: 'Choose a score from 0 to 4.' }).int().min(0, 'From 0 to 4.').max(4, 'From 0 to 4.');
+const Score = z
+  .number({ error: 'Choose a score from 0 to 4.' })
+  .check(z.int(), z.gte(0, 'From 0 to 4.'), z.lte(4, 'From 0 to 4.'));
 
 export const LogGradeInput = z.object({
   completeness: Score,
   measurements: Score,
   photos: Score,
-  comment: z.string().trim().max(2000, 'Keep the comment under 2000 characters.').default(''),
+  comment: z._default(z.string().check(z.trim(), z.maxLength(2000, 'Keep the comment under 2000 characters.')), ''),
 });
 export type LogGradeInput = z.infer<typeof LogGradeInput>;
 
 export const LogCommentInput = z.object({
-  body: z.string().trim().min(1, 'Write a comment first.').max(4000, 'Keep a comment under 4000 characters.'),
+  body: z
+    .string()
+    .check(
+      z.trim(),
+      z.minLength(1, 'Write a comment first.'),
+      z.maxLength(4000, 'Keep a comment under 4000 characters.'),
+    ),
 });
 export type LogCommentInput = z.infer<typeof LogCommentInput>;
 
-const PersonRef = z.object({ id: z.number().int(), name: z.string() });
+const PersonRef = z.object({ id: z.int(), name: z.string() });
 
 export const LogMeasurementDTO = MeasurementInput;
 
 export const LogCommentDTO = z.object({
-  id: z.number().int(),
+  id: z.int(),
   author: PersonRef,
   body: z.string(),
   createdAt: z.string(),
@@ -153,34 +178,34 @@ export const LogCommentDTO = z.object({
 export type LogCommentDTO = z.infer<typeof LogCommentDTO>;
 
 export const LogGradeDTO = z.object({
-  id: z.number().int(),
+  id: z.int(),
   mentor: PersonRef,
-  completeness: z.number().int(),
-  measurements: z.number().int(),
-  photos: z.number().int(),
+  completeness: z.int(),
+  measurements: z.int(),
+  photos: z.int(),
   comment: z.string(),
   /** The entry's version when the grade was given; compare with the entry's `version`. */
-  entryVersion: z.number().int(),
+  entryVersion: z.int(),
   createdAt: z.string(),
 });
 export type LogGradeDTO = z.infer<typeof LogGradeDTO>;
 
 export const LogLessonRef = z.object({
-  id: z.number().int(),
+  id: z.int(),
   slug: z.string(),
   title: z.string(),
-  course: z.object({ id: z.number().int(), slug: z.string(), title: z.string() }),
+  course: z.object({ id: z.int(), slug: z.string(), title: z.string() }),
 });
 export type LogLessonRef = z.infer<typeof LogLessonRef>;
 
 export const LogEntryDTO = z.object({
-  id: z.number().int(),
+  id: z.int(),
   apprentice: PersonRef,
   date: z.string(),
-  minutes: z.number().int(),
+  minutes: z.int(),
   title: z.string(),
   notes: z.string(),
-  lesson: LogLessonRef.nullable(),
+  lesson: z.nullable(LogLessonRef),
   measurements: z.array(LogMeasurementDTO),
   photos: z.array(UploadDTO),
   calculations: z.array(CalculationDTO),
@@ -188,35 +213,35 @@ export const LogEntryDTO = z.object({
   /** Oldest first. */
   grades: z.array(LogGradeDTO),
   /** Starts at 1 and goes up by one with every edit. */
-  version: z.number().int(),
-  editedAt: z.string().nullable(),
+  version: z.int(),
+  editedAt: z.nullable(z.string()),
   /** The time of the last edit when it came after the latest grade; null when ungraded or unchanged since. */
-  changedAfterGradingAt: z.string().nullable(),
+  changedAfterGradingAt: z.nullable(z.string()),
   createdAt: z.string(),
 });
 export type LogEntryDTO = z.infer<typeof LogEntryDTO>;
 
 export const LogEntryList = z.object({
   entries: z.array(LogEntryDTO),
-  total: z.number().int(),
-  page: z.number().int(),
-  pageSize: z.number().int(),
+  total: z.int(),
+  page: z.int(),
+  pageSize: z.int(),
 });
 export type LogEntryList = z.infer<typeof LogEntryList>;
 
 export const LogSummary = z.object({
   apprentice: PersonRef,
   /** Oldest first; weeks start on Monday. */
-  weeks: z.array(z.object({ weekStart: z.string(), minutes: z.number().int() })),
-  thisWeekMinutes: z.number().int(),
-  totalMinutes: z.number().int(),
-  entryCount: z.number().int(),
+  weeks: z.array(z.object({ weekStart: z.string(), minutes: z.int() })),
+  thisWeekMinutes: z.int(),
+  totalMinutes: z.int(),
+  entryCount: z.int(),
   /** All time, largest first; `course` null gathers entries without a lesson. */
   courses: z.array(
     z.object({
-      course: z.object({ id: z.number().int(), title: z.string() }).nullable(),
-      minutes: z.number().int(),
-      entries: z.number().int(),
+      course: z.nullable(z.object({ id: z.int(), title: z.string() })),
+      minutes: z.int(),
+      entries: z.int(),
     }),
   ),
 });
@@ -226,20 +251,18 @@ export type LogSummary = z.infer<typeof LogSummary>;
 export const LogEntriesToRead = z.object({
   entries: z.array(
     z.object({
-      id: z.number().int(),
+      id: z.int(),
       apprentice: PersonRef,
       date: z.string(),
       title: z.string(),
-      minutes: z.number().int(),
+      minutes: z.int(),
     }),
   ),
-  total: z.number().int(),
+  total: z.int(),
 });
 export type LogEntriesToRead = z.infer<typeof LogEntriesToRead>;
 
 export const LogApprentices = z.object({
-  apprentices: z.array(
-    PersonRef.extend({ entries: z.number().int(), lastDate: z.string().nullable(), ungraded: z.number().int() }),
-  ),
+  apprentices: z.array(z.extend(PersonRef, { entries: z.int(), lastDate: z.nullable(z.string()), ungraded: z.int() })),
 });
 export type LogApprentices = z.infer<typeof LogApprentices>;

@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import { emptyAsAbsent, QueryPage } from './query';
 
 /**
  * Every e-mail waits in the outbox until it is delivered. `queued` covers both "not tried yet" and "will be tried
@@ -13,15 +14,15 @@ export const OUTBOX_KINDS = ['password-reset', 'invitation', 'enrolment', 'notif
 export type OutboxKind = (typeof OUTBOX_KINDS)[number];
 
 export const OutboxMessageDTO = z.object({
-  id: z.number().int(),
+  id: z.int(),
   to: z.string(),
   subject: z.string(),
   kind: z.enum(OUTBOX_KINDS),
   state: OutboxState,
-  attempts: z.number().int(),
-  lastError: z.string().nullable(),
-  nextAttemptAt: z.string().nullable(),
-  sentAt: z.string().nullable(),
+  attempts: z.int(),
+  lastError: z.nullable(z.string()),
+  nextAttemptAt: z.nullable(z.string()),
+  sentAt: z.nullable(z.string()),
   createdAt: z.string(),
 });
 export type OutboxMessageDTO = z.infer<typeof OutboxMessageDTO>;
@@ -29,21 +30,21 @@ export type OutboxMessageDTO = z.infer<typeof OutboxMessageDTO>;
 export const OUTBOX_PAGE_SIZE = 50;
 
 export const OutboxQuery = z.object({
-  state: z.preprocess((v) => (v === '' ? undefined : v), OutboxState.optional()),
-  page: z.coerce.number().int().min(1).max(10_000).default(1),
+  state: emptyAsAbsent(OutboxState),
+  page: QueryPage(10_000),
 });
 export type OutboxQuery = z.infer<typeof OutboxQuery>;
 
 export const OutboxReply = z.object({
   messages: z.array(OutboxMessageDTO),
-  total: z.number().int(),
-  page: z.number().int(),
-  pageSize: z.number().int(),
+  total: z.int(),
+  page: z.int(),
+  pageSize: z.int(),
   /** How many are in each state, whatever the filter. */
-  counts: z.object({ queued: z.number().int(), sent: z.number().int(), failed: z.number().int() }),
+  counts: z.object({ queued: z.int(), sent: z.int(), failed: z.int() }),
 });
 export type OutboxReply = z.infer<typeof OutboxReply>;
 
 /** What an invitation's e-mail has come to, shown beside it. */
-export const MailStatus = z.object({ state: OutboxState, lastError: z.string().nullable() });
+export const MailStatus = z.object({ state: OutboxState, lastError: z.nullable(z.string()) });
 export type MailStatus = z.infer<typeof MailStatus>;

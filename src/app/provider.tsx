@@ -1,22 +1,15 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { lazy, Suspense, useState, type ReactNode } from 'react';
-import { ApiError } from '@/lib/api-client';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { lazy, Suspense, type ReactNode } from 'react';
+import { queryClient } from './query-client';
 import { useHeadingTitle } from './use-heading-title';
 
 // Loaded after the first screen: nothing toasts before the user has done something.
 const Toaster = lazy(() => import('sonner').then((m) => ({ default: m.Toaster })));
 
-/** 4xx answers are final: retrying a 404 or 403 only delays the message. */
-const retry = (count: number, error: unknown) =>
-  !(error instanceof ApiError && error.status >= 400 && error.status < 500) && count < 2;
-
 export function AppProvider({ children }: { children: ReactNode }) {
-  const [client] = useState(
-    () => new QueryClient({ defaultOptions: { queries: { retry, refetchOnWindowFocus: false } } }),
-  );
   useHeadingTitle();
   return (
-    <QueryClientProvider client={client}>
+    <QueryClientProvider client={queryClient}>
       {children}
       <Suspense fallback={null}>
         <Toaster

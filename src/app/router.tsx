@@ -1,10 +1,28 @@
-import { createBrowserRouter } from 'react-router-dom';
+import { createBrowserRouter, type LoaderFunctionArgs } from 'react-router-dom';
+import { isCalculatorName } from '@shared/calc/names';
 import { Loading } from '@/components/ui/states';
+import { loadForm } from '@/features/calculators/forms/load-form';
+import { queryClient } from './query-client';
 import { AppShell } from './app-shell';
 import { RouteError } from './route-error';
 
 // Shown while the first page's code loads; without it the router renders nothing and warns.
 const opening = <Loading label="Opening Tickwright…" />;
+
+// These loaders only start downloads, so that a page's data or calculator arrives alongside the page's own code
+// instead of after it; they never wait, and the page shows its own loading and error states.
+function startLesson({ params }: LoaderFunctionArgs) {
+  const { slug = '', lessonSlug = '' } = params;
+  void import('@/features/courses/api/get-lesson').then(({ lessonQueryOptions }) =>
+    queryClient.prefetchQuery(lessonQueryOptions(slug, lessonSlug)),
+  );
+  return null;
+}
+
+function startCalculator({ params }: LoaderFunctionArgs) {
+  if (params.name && isCalculatorName(params.name)) void loadForm(params.name).catch(() => undefined);
+  return null;
+}
 
 /** Created once, outside React; every page module is loaded on demand. */
 export const router = createBrowserRouter([
@@ -41,11 +59,15 @@ export const router = createBrowserRouter([
       // Feature pages are listed here, one line each.
       { path: 'courses', lazy: () => import('./routes/courses/course-list') },
       { path: 'courses/:slug', lazy: () => import('./routes/courses/course-page') },
-      { path: 'courses/:slug/:lessonSlug', lazy: () => import('./routes/courses/lesson-page') },
+      { path: 'courses/:slug/:lessonSlug', loader: startLesson, lazy: () => import('./routes/courses/lesson-page') },
       { path: 'search', lazy: () => import('./routes/search') },
       { path: 'calculators', lazy: () => import('./routes/calculators/calculators-index') },
       { path: 'calculators/saved', lazy: () => import('./routes/calculators/saved-calculations') },
-      { path: 'calculators/:name', lazy: () => import('./routes/calculators/calculator-page') },
+      {
+        path: 'calculators/:name',
+        loader: startCalculator,
+        lazy: () => import('./routes/calculators/calculator-page'),
+      },
       { path: 'bench-log', lazy: () => import('./routes/bench-log/bench-log-page') },
       { path: 'bench-log/:id', lazy: () => import('./routes/bench-log/log-entry-page') },
       { path: 'account', lazy: () => import('./routes/account') },

@@ -1,4 +1,4 @@
-import type { z } from 'zod';
+import * as z from 'zod/mini';
 
 /** An error reply from the API, in the one shape the server uses: `{ error: { code, message, fields? } }`. */
 export class ApiError extends Error {
@@ -15,7 +15,7 @@ export class ApiError extends Error {
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
-interface RequestOptions<S extends z.ZodType | undefined> {
+interface RequestOptions<S extends z.core.$ZodType | undefined> {
   method?: Method;
   body?: unknown;
   /** Parses the reply; a reply that does not match is a bug on one side and surfaces as an error. */
@@ -23,10 +23,10 @@ interface RequestOptions<S extends z.ZodType | undefined> {
   signal?: AbortSignal;
 }
 
-type Reply<S> = S extends z.ZodType ? z.output<S> : unknown;
+type Reply<S> = S extends z.core.$ZodType ? z.output<S> : unknown;
 
 /** The one way the client talks to the server: cookies included, JSON or FormData, typed errors. */
-export async function api<S extends z.ZodType | undefined = undefined>(
+export async function api<S extends z.core.$ZodType | undefined = undefined>(
   path: string,
   { method = 'GET', body, schema, signal }: RequestOptions<S> = {},
 ): Promise<Reply<S>> {
@@ -44,11 +44,11 @@ export async function api<S extends z.ZodType | undefined = undefined>(
   if (!res.ok) throw await toApiError(res.status, await res.text(), res.headers.get('Retry-After'));
   if (res.status === 204) return undefined as Reply<S>;
   const data: unknown = await res.json();
-  return (schema ? schema.parse(data) : data) as Reply<S>;
+  return (schema ? z.parse(schema, data) : data) as Reply<S>;
 }
 
 /** Upload with progress (fetch has no upload progress): XMLHttpRequest, same error shape as `api`. */
-export function uploadWithProgress<S extends z.ZodType>(
+export function uploadWithProgress<S extends z.core.$ZodType>(
   path: string,
   form: FormData,
   schema: S,
@@ -63,7 +63,7 @@ export function uploadWithProgress<S extends z.ZodType>(
     xhr.onload = async () => {
       if (xhr.status >= 200 && xhr.status < 300) {
         try {
-          resolve(schema.parse(JSON.parse(xhr.responseText)));
+          resolve(z.parse(schema, JSON.parse(xhr.responseText)));
         } catch (err) {
           reject(err);
         }

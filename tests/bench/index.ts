@@ -1,6 +1,7 @@
 import { execSync } from 'node:child_process';
 import { runApiBench } from './api';
 import { runBundleBudget } from './bundle-budget';
+import { runLighthouseBench } from './lighthouse';
 import { runQueueBench } from './queue';
 import { runTrainSearchBench } from './train-search';
 import { runUploadBench } from './uploads';
@@ -13,5 +14,6 @@ const results = [
   await runUploadBench(),
   await runQueueBench(),
   await runApiBench(),
+  await runLighthouseBench(),
 ];
 process.exitCode = results.every(Boolean) ? 0 : 1;

@@ -31,7 +31,7 @@ describe('calculator widget', () => {
   it('when a lesson embeds a calculator by name, then it computes as you type and leaves the page address alone', async () => {
     fakeServer();
     renderInLesson('broach-taper');
-    expect(screen.getByText('Broach taper calculator')).toBeInTheDocument();
+    expect(await screen.findByText('Broach taper calculator')).toBeInTheDocument();
     // The lesson's five-sided broach example (computed in tests/shared/calc/broach-taper.test.ts)
     expect(resultOf('Insertion depth')).toBe('23.49 mm');
     const target = screen.getByRole('textbox', { name: /Target hole diameter/ });

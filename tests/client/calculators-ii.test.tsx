@@ -3,7 +3,7 @@ import { fireEvent, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { MemoryRouter } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { CalculatorName } from '@shared/calc/index';
+import type { CalculatorName } from '@shared/calc/names';
 import { authKeys } from '@/features/auth/api/auth-keys';
 import { CalculatorShell } from '@/features/calculators/components/calculator-shell';
 import { FORMS } from '@/features/calculators/forms';

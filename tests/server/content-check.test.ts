@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { promisify } from 'node:util';
 import { afterEach, describe, expect, it } from 'vitest';
-import { CALCULATOR_NAMES } from '@shared/calc';
+import { CALCULATOR_NAMES } from '@shared/calc/names';
 import { CONTENT_DIR } from '../../server/boot';
 import { checkContent } from '../../server/features/courses/content-check';
 

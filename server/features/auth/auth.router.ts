@@ -1,6 +1,6 @@
 import { Router, type Request } from 'express';
 import passport from 'passport';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { LoginInput, PasswordResetInput, PasswordResetRequest, type UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';
 import { parseBody } from '../../lib/validate';
@@ -20,7 +20,7 @@ const RESET_REQUESTED = {
   message:
     'If that address belongs to an active account, an e-mail with a link to set a new password is on its way. The link works for one hour.',
 };
-const ResetToken = z.string().min(1).max(200);
+const ResetToken = z.string().check(z.minLength(1), z.maxLength(200));
 
 export function authRouter(deps: { appUrl: string }) {
   const router = Router();

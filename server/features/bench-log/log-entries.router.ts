@@ -1,5 +1,5 @@
 import { Router, type Request } from 'express';
-import type { z } from 'zod';
+import * as z from 'zod/mini';
 import {
   LogCommentInput,
   LogEntryCreateInput,
@@ -25,8 +25,8 @@ import { entriesToRead, logApprentices, logSummary } from './log-summary.service
  * Like parseBody, but a problem inside a list names its row as well ("measurements.1.unit") next to the list itself,
  * so the form can mark the exact cell while a plain client still finds `measurements` in the fields.
  */
-function parseEntryBody<S extends z.ZodType>(schema: S, req: Request): z.output<S> {
-  const parsed = schema.safeParse(req.body ?? {});
+function parseEntryBody<S extends z.core.$ZodType>(schema: S, req: Request): z.output<S> {
+  const parsed = z.safeParse(schema, req.body ?? {});
   if (parsed.success) return parsed.data;
   const fields: Record<string, string[]> = {};
   const add = (key: string, message: string) => (fields[key] ??= []).push(message);

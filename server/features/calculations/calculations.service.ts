@@ -1,5 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
-import { calculatorByName, type CalculatorName } from '@shared/calc/index';
+import { calculatorByName } from '@shared/calc/index';
+import type { CalculatorName } from '@shared/calc/names';
 import type { CalculationCreateInput, CalculationDTO, CalculationListQuery } from '@shared/schemas/calculation';
 import type { UserDTO } from '@shared/schemas/user';
 import { AppError } from '../../lib/app-error';

@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
-import { calculatorByName, isCalculatorName } from '@shared/calc/index';
+import { calculatorByName } from '@shared/calc/index';
+import { isCalculatorName } from '@shared/calc/names';
 import type { CalculatorExample } from '@shared/schemas/content';
 import type { ContentProblem } from './content-loader';
 

@@ -1,5 +1,6 @@
 import { Router } from 'express';
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import { QueryInt } from '@shared/schemas/query';
 import { formatScore } from '@shared/grading/score';
 import { ReviewInput, ReviewQueueQuery } from '@shared/schemas/review';
 import type { AppDeps } from '../../app';
@@ -11,7 +12,7 @@ import { paths } from '../submissions/links';
 import { queueCount, queueFilters, reviewQueue } from './review-queue.service';
 import { createReview, recentReviews } from './reviews.service';
 
-const RecentQuery = z.object({ limit: z.coerce.number().int().min(1).max(50).default(10) });
+const RecentQuery = z.object({ limit: z._default(QueryInt(1, 50), 10) });
 
 /** Mounted at the API root: it answers /review-queue, /reviews and /submissions/:id/reviews, and nothing else. */
 export function reviewsRouter({ sequelize, config }: AppDeps) {

@@ -1,6 +1,7 @@
 import { ChevronRight } from 'lucide-react';
 import { Link } from 'react-router-dom';
-import { CALCULATOR_NAMES, calculators } from '@shared/calc/index';
+import { calculators } from '@shared/calc/index';
+import { CALCULATOR_NAMES } from '@shared/calc/names';
 import { ButtonLink } from '@/components/ui/button';
 import { Card, PageHeader } from '@/components/ui/card';
 import { paths } from '@/config/paths';

@@ -4,7 +4,7 @@ import { PageHeader } from '@/components/ui/card';
 import { ErrorNotice, Loading } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { useUser } from '@/features/auth/api/get-me';
-import { useLesson } from '@/features/courses/api/get-lesson';
+import { useLesson, usePrefetchLesson } from '@/features/courses/api/get-lesson';
 import { formatMinutes } from '@/features/courses/components/format';
 import { LessonMarkdown } from '@/features/courses/components/lesson-markdown';
 import { LessonToc } from '@/features/courses/components/lesson-toc';
@@ -17,6 +17,7 @@ export function Component() {
   const { slug = '', lessonSlug = '' } = useParams();
   const user = useUser();
   const { data, isPending, error } = useLesson(slug, lessonSlug);
+  usePrefetchLesson(slug, data?.next?.slug);
   if (isPending) return <Loading label="Loading the lesson…" />;
   if (error instanceof ApiError && error.status === 404) return <NotFound />;
   if (error) return <ErrorNotice error={error} title="The lesson could not be loaded" />;

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { PasswordResetRequest } from '@shared/schemas/user';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';

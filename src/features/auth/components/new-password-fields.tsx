@@ -1,5 +1,5 @@
 import type { UseFormRegisterReturn } from 'react-hook-form';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { PASSWORD_MIN } from '@shared/schemas/user';
 import { TextField } from '@/components/ui/field';
 
@@ -7,13 +7,13 @@ import { TextField } from '@/components/ui/field';
  * A form schema with a "type it again" field that must match `field`: every form that sets a password asks for it
  * twice, so a typing slip cannot lock anyone out.
  */
-export function withRepeat<T extends z.ZodRawShape>(schema: z.ZodObject<T>, field: keyof T & string) {
-  return schema
-    .extend({ repeat: z.string() })
-    .refine((v) => (v as Record<string, unknown>).repeat === (v as Record<string, unknown>)[field], {
+export function withRepeat<T extends z.core.$ZodLooseShape>(schema: z.ZodMiniObject<T>, field: keyof T & string) {
+  return z.extend(schema, { repeat: z.string() }).check(
+    z.refine((v) => (v as Record<string, unknown>).repeat === (v as Record<string, unknown>)[field], {
       path: ['repeat'],
       message: 'The two passwords are not the same.',
-    });
+    }),
+  );
 }
 
 interface NewPasswordFieldsProps {

@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { toast } from 'sonner';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { PasswordChangeInput } from '@shared/schemas/user';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';

@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { NewPassword } from '@shared/schemas/user';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { ErrorNotice } from '@/components/ui/states';

@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from 'react';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { Link } from 'react-router-dom';
 import { LoginInput } from '@shared/schemas/user';
 import { Button } from '@/components/ui/button';

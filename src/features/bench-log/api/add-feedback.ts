@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { z } from 'zod';
+import type * as z from 'zod/mini';
 import { LogEntryDTO, type LogCommentInput, type LogGradeInput } from '@shared/schemas/log-entry';
 import { api } from '@/lib/api-client';
 import { logEntryKeys } from './log-entry-keys';

@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
-import { calculators, isCalculatorName } from '@shared/calc/index';
+import { calculators } from '@shared/calc/index';
+import { isCalculatorName } from '@shared/calc/names';
 import { paths } from '@/config/paths';
 import { useSavedResults } from '../api/get-attach-options';
 

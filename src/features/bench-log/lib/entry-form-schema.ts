@@ -1,40 +1,48 @@
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { LogDate, MAX_DAY_MINUTES, localToday, type LogEntryDTO } from '@shared/schemas/log-entry';
 
 /** What the form holds: text as typed (so an empty box is allowed while typing); turned into the API's input on save. */
 const wholeNumber = (max: number, what: string) =>
-  z
-    .string()
-    .trim()
-    .refine((s) => s === '' || (/^\d+$/.test(s) && Number(s) <= max), `${what}: a whole number up to ${max}.`);
+  z.string().check(
+    z.trim(),
+    z.refine((s) => s === '' || (/^\d+$/.test(s) && Number(s) <= max), `${what}: a whole number up to ${max}.`),
+  );
 
 export const EntryFormSchema = z
   .object({
-    date: LogDate.refine((d) => d <= localToday(), 'The date cannot be in the future.'),
+    date: LogDate.check(z.refine((d) => d <= localToday(), 'The date cannot be in the future.')),
     hours: wholeNumber(24, 'Hours'),
     minutes: wholeNumber(59, 'Minutes'),
-    title: z.string().trim().min(1, 'Give the entry a title.').max(120, 'Keep the title under 120 characters.'),
-    notes: z.string().max(20_000, 'Keep the notes under 20 000 characters.'),
+    title: z
+      .string()
+      .check(
+        z.trim(),
+        z.minLength(1, 'Give the entry a title.'),
+        z.maxLength(120, 'Keep the title under 120 characters.'),
+      ),
+    notes: z.string().check(z.maxLength(20_000, 'Keep the notes under 20 000 characters.')),
     lessonId: z.string(),
     measurements: z.array(
       z.object({
-        name: z.string().trim().min(1, 'Say what was measured.').max(80),
+        name: z.string().check(z.trim(), z.minLength(1, 'Say what was measured.'), z.maxLength(80)),
         // A comma is accepted as the decimal mark, as many benches write it.
-        value: z
-          .string()
-          .trim()
-          .refine((s) => s !== '' && Number.isFinite(Number(s.replace(',', '.'))), 'Enter the value as a number.'),
-        unit: z.string().trim().min(1, 'Give a unit (mm, µm, N …).').max(20),
+        value: z.string().check(
+          z.trim(),
+          z.refine((s) => s !== '' && Number.isFinite(Number(s.replace(',', '.'))), 'Enter the value as a number.'),
+        ),
+        unit: z.string().check(z.trim(), z.minLength(1, 'Give a unit (mm, µm, N …).'), z.maxLength(20)),
       }),
     ),
     calculationIds: z.array(z.number()),
   })
-  .superRefine((v, ctx) => {
-    const total = Number(v.hours || 0) * 60 + Number(v.minutes || 0);
-    if (total < 1) ctx.addIssue({ code: 'custom', path: ['minutes'], message: 'Log at least 1 minute.' });
-    if (total > MAX_DAY_MINUTES)
-      ctx.addIssue({ code: 'custom', path: ['minutes'], message: 'One date holds at most 24 h.' });
-  });
+  .check(
+    z.superRefine((v, ctx) => {
+      const total = Number(v.hours || 0) * 60 + Number(v.minutes || 0);
+      if (total < 1) ctx.addIssue({ code: 'custom', path: ['minutes'], message: 'Log at least 1 minute.' });
+      if (total > MAX_DAY_MINUTES)
+        ctx.addIssue({ code: 'custom', path: ['minutes'], message: 'One date holds at most 24 h.' });
+    }),
+  );
 export type EntryFormValues = z.infer<typeof EntryFormSchema>;
 
 export const totalMinutes = (v: Pick<EntryFormValues, 'hours' | 'minutes'>) =>

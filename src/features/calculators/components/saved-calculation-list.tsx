@@ -1,6 +1,7 @@
 import { FolderOpen, Trash2 } from 'lucide-react';
 import { toast } from 'sonner';
-import { calculators, isCalculatorName } from '@shared/calc/index';
+import { calculators } from '@shared/calc/index';
+import { isCalculatorName } from '@shared/calc/names';
 import type { CalculationDTO } from '@shared/schemas/calculation';
 import { ButtonLink } from '@/components/ui/button';
 import { ConfirmStep } from '@/components/ui/confirm-step';

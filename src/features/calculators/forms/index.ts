@@ -1,4 +1,4 @@
-import type { CalculatorName } from '@shared/calc/index';
+import type { CalculatorName } from '@shared/calc/names';
 import type { AnyCalculatorForm } from '../lib/define-form';
 import { inputToDraft, type Draft } from '../lib/draft';
 import { broachTaperForm } from './broach-taper';

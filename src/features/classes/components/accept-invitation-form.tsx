@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { AcceptInvitationInput, type InvitationPreview } from '@shared/schemas/invitation';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Controller, useForm } from 'react-hook-form';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import type { ClassCreateInput, ClassDTO } from '@shared/schemas/class';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -11,18 +11,20 @@ import { useClassFormOptions } from '../api/get-classes';
 const Day = z.iso.date('Enter a date.');
 const ClassForm = z
   .object({
-    name: z.string().trim().min(2, 'Give the class a name of at least 2 characters.').max(120),
-    courseId: z.coerce.number<string>().int().positive('Choose a course.'),
+    name: z
+      .string()
+      .check(z.trim(), z.minLength(2, 'Give the class a name of at least 2 characters.'), z.maxLength(120)),
+    courseId: z.coerce.number<string>().check(z.int(), z.positive('Choose a course.')),
     startsOn: Day,
     endsOn: Day,
     capacity: z.coerce
       .number<string>()
-      .int('Whole apprentices only.')
-      .min(1, 'Room for at least 1 apprentice.')
-      .max(500),
+      .check(z.int('Whole apprentices only.'), z.gte(1, 'Room for at least 1 apprentice.'), z.lte(500)),
     mentorIds: z.array(z.number()),
   })
-  .refine((v) => v.endsOn >= v.startsOn, { path: ['endsOn'], message: 'The class cannot end before it starts.' });
+  .check(
+    z.refine((v) => v.endsOn >= v.startsOn, { path: ['endsOn'], message: 'The class cannot end before it starts.' }),
+  );
 type FormIn = z.input<typeof ClassForm>;
 
 const FIELDS = ['name', 'courseId', 'startsOn', 'endsOn', 'capacity', 'mentorIds'] as const;

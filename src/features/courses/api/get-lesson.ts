@@ -1,4 +1,5 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useEffect } from 'react';
 import { LessonReply } from '@shared/schemas/course';
 import { api } from '@/lib/api-client';
 import { courseKeys } from './course-keys';
@@ -16,3 +17,11 @@ export const lessonQueryOptions = (courseSlug: string, lessonSlug: string) =>
 
 export const useLesson = (courseSlug: string, lessonSlug: string) =>
   useQuery(lessonQueryOptions(courseSlug, lessonSlug));
+
+/** Fetches the next lesson once this one is on screen, so that "Next lesson" opens without waiting at the bench. */
+export function usePrefetchLesson(courseSlug: string, lessonSlug: string | undefined) {
+  const queryClient = useQueryClient();
+  useEffect(() => {
+    if (lessonSlug) void queryClient.prefetchQuery(lessonQueryOptions(courseSlug, lessonSlug));
+  }, [queryClient, courseSlug, lessonSlug]);
+}

@@ -1,5 +1,5 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
+import * as z from 'zod/mini';
 import { UserListItem, UserListReply, type UserListQuery, type UserUpdateInput } from '@shared/schemas/user';
 import { api } from '@/lib/api-client';
 
