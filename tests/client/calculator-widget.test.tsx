@@ -1,5 +1,5 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, screen } from '@testing-library/react';
+import { act, render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { MemoryRouter, useLocation } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
@@ -30,8 +30,9 @@ function renderInLesson(name: string) {
 describe('calculator widget', () => {
   it('when a lesson embeds a calculator by name, then it computes as you type and leaves the page address alone', async () => {
     fakeServer();
-    renderInLesson('broach-taper');
-    expect(await screen.findByText('Broach taper calculator')).toBeInTheDocument();
+    // The calculator's own chunk arrives after the lesson's text; rendering suspends until it has.
+    await act(async () => renderInLesson('broach-taper'));
+    expect(await screen.findByText('Broach taper calculator', {}, { timeout: 15_000 })).toBeInTheDocument();
     // The lesson's five-sided broach example (computed in tests/shared/calc/broach-taper.test.ts)
     expect(resultOf('Insertion depth')).toBe('23.49 mm');
     const target = screen.getByRole('textbox', { name: /Target hole diameter/ });

@@ -1,7 +1,9 @@
 import { ExternalLink } from 'lucide-react';
+import { Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { isCalculatorName, type CalculatorName } from '@shared/calc/names';
 import { Card } from '@/components/ui/card';
+import { Loading } from '@/components/ui/states';
 import { paths } from '@/config/paths';
 import { useCalculatorForm } from '../forms/load-form';
 import { CalculatorShell } from './calculator-shell';
@@ -18,7 +20,12 @@ export function CalculatorWidget({ name }: { name: string }) {
       </Card>
     );
   }
-  return <EmbeddedCalculator name={name} />;
+  // The lesson's text shows at once; only the calculator waits for its own chunk.
+  return (
+    <Suspense fallback={<Loading label="Loading the calculator…" />}>
+      <EmbeddedCalculator name={name} />
+    </Suspense>
+  );
 }
 
 function EmbeddedCalculator({ name }: { name: CalculatorName }) {
