@@ -86,7 +86,7 @@ test('when an apprentice goes through Today, account, calculators and bench log,
 test('when a mentor goes through Today, classes and the bench logs, then axe finds nothing serious', async ({
   page,
 }) => {
-  test.setTimeout(90_000);
+  test.setTimeout(180_000);
   const errors = watchErrors(page);
   await signIn(page, demo.odile);
   const found = await checkPages(page, ['/', '/account', '/classes', '/bench-log', '/calculators/broach-taper']);
@@ -107,7 +107,7 @@ test('when a mentor goes through Today, classes and the bench logs, then axe fin
 });
 
 test('when the guild office goes through its pages and a class, then axe finds nothing serious', async ({ page }) => {
-  test.setTimeout(90_000);
+  test.setTimeout(180_000);
   const errors = watchErrors(page);
   await signIn(page, demo.admin);
   const found = await checkPages(page, [
