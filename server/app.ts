@@ -22,6 +22,8 @@ import { notificationsRouter } from './features/notifications/notifications.rout
 import { reviewsRouter } from './features/reviews/reviews.router';
 import { submissionsRouter } from './features/submissions/submissions.router';
 import { uploadsRouter } from './features/uploads/uploads.router';
+import { certificatesRouter, verifyRouter } from './features/record/certificates.router';
+import { apprenticesRouter, signOffsRouter } from './features/record/record.router';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import { httpLogger, type Logger } from './lib/logger';
 import { rejectBadAddress, rejectBadBody } from './lib/text-guard';
@@ -90,6 +92,10 @@ export function createApp(deps: AppDeps) {
   api.use(reviewsRouter(deps));
   api.use('/notifications', notificationsRouter());
   api.use('/log-entries', logEntriesRouter(deps));
+  api.use('/apprentices', apprenticesRouter(deps));
+  api.use('/sign-offs', signOffsRouter(deps));
+  api.use('/certificates', certificatesRouter(deps));
+  api.use('/verify', verifyRouter(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

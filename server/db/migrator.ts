@@ -7,6 +7,7 @@ import * as m0004 from './migrations/0004-calculations';
 import * as m0005 from './migrations/0005-submissions';
 import * as m0006 from './migrations/0006-bench-log';
 import * as m0007 from './migrations/0007-invitations-audit';
+import * as m0010 from './migrations/0010-apprentice-record';
 
 export type Migration = {
   up: (ctx: { context: QueryInterface }) => Promise<void>;
@@ -22,6 +23,7 @@ const migrations: Record<string, Migration> = {
   '0005-submissions': m0005,
   '0006-bench-log': m0006,
   '0007-invitations-audit': m0007,
+  '0010-apprentice-record': m0010,
 };
 
 export function createMigrator(sequelize: Sequelize) {

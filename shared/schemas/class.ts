@@ -18,6 +18,14 @@ const classFields = {
   endsOn: Day,
   capacity: z.number().int().min(1, 'A class has room for at least 1 apprentice.').max(500, 'At most 500 apprentices.'),
   mentorIds: MentorIds.default([]),
+  /** Bench time asked of each apprentice per week, in minutes; null for none. */
+  requiredMinutesPerWeek: z
+    .number()
+    .int('Give whole minutes.')
+    .min(1, 'Ask for at least 1 minute a week, or leave it empty.')
+    .max(7 * 24 * 60, 'A week has 10 080 minutes.')
+    .nullable()
+    .default(null),
 };
 
 const endsAfterStart = (v: { startsOn?: string; endsOn?: string }) =>
@@ -29,7 +37,12 @@ export type ClassCreateInput = z.infer<typeof ClassCreateInput>;
 
 /** Any subset of the fields; `archived` archives (true) or brings back (false) the class. */
 export const ClassUpdateInput = z
-  .object({ ...classFields, mentorIds: MentorIds, archived: z.boolean() })
+  .object({
+    ...classFields,
+    mentorIds: MentorIds,
+    requiredMinutesPerWeek: classFields.requiredMinutesPerWeek.removeDefault(),
+    archived: z.boolean(),
+  })
   .partial()
   .refine(endsAfterStart, endsAfterStartIssue);
 export type ClassUpdateInput = z.infer<typeof ClassUpdateInput>;
@@ -62,6 +75,7 @@ export const ClassDTO = z.object({
   startsOn: z.string(),
   endsOn: z.string(),
   capacity: z.number().int(),
+  requiredMinutesPerWeek: z.number().int().nullable(),
   archived: z.boolean(),
   archivedAt: z.string().nullable(),
   mentors: z.array(PersonRef),

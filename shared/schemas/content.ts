@@ -3,7 +3,12 @@ import { z } from 'zod';
 /** The front matter of content/<course>/course.md and NN-slug.md lesson files; content:check and the sync use it. */
 const Key = z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'use kebab-case (a-z, 0-9 and dashes)');
 
-export const Skill = z.object({ key: Key, label: z.string().min(1) });
+export const Skill = z.object({
+  key: Key,
+  label: z.string().min(1),
+  /** What a mentor must see before signing the skill off: one or two sentences. content:check requires it. */
+  standard: z.string().trim().min(1).max(600).optional(),
+});
 export type Skill = z.infer<typeof Skill>;
 
 export const ProjectCriterion = z.object({
