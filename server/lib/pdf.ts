@@ -41,6 +41,15 @@ export function createPdf(info: PdfInfo): PDFKit.PDFDocument {
   return doc;
 }
 
+/**
+ * Figures, codes and links in JetBrains Mono, printed as typed: its code ligatures ("//", "->") are glyphs PDFKit
+ * cannot subset, so they are switched off (fontkit takes a feature map where PDFKit's types only allow a list).
+ */
+export function monoText(doc: PDFKit.PDFDocument, text: string, options: PDFKit.Mixins.TextOptions = {}) {
+  const asTyped = { liga: false, calt: false } as unknown as PDFKit.Mixins.TextOptions['features'];
+  return doc.font('mono').text(text, { ...options, features: asTyped });
+}
+
 /** A QR code drawn as vector squares (crisp at any print size), `size` points wide, with its quiet zone. */
 export function drawQrCode(doc: PDFKit.PDFDocument, text: string, x: number, y: number, size: number) {
   const qr = QRCode.create(text, { errorCorrectionLevel: 'M' });
@@ -55,14 +64,4 @@ export function drawQrCode(doc: PDFKit.PDFDocument, text: string, x: number, y: 
     }
   }
   doc.fill().restore();
-}
-
-/** The whole document as one buffer (for tests and small documents); large ones are piped instead. */
-export function pdfBuffer(doc: PDFKit.PDFDocument): Promise<Buffer> {
-  return new Promise((resolve, reject) => {
-    const chunks: Buffer[] = [];
-    doc.on('data', (c: Buffer) => chunks.push(c));
-    doc.on('end', () => resolve(Buffer.concat(chunks)));
-    doc.on('error', reject);
-  });
 }

@@ -1,6 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { formatMinutes } from '@shared/schemas/log-entry';
-import { createPdf, drawQrCode, INK } from '../../lib/pdf';
+import { createPdf, drawQrCode, INK, monoText } from '../../lib/pdf';
 import { User } from '../auth/user.model';
 import { Course } from '../courses/course.model';
 import type { Certificate } from './record.model';
@@ -63,7 +63,11 @@ export async function certificatePdf(
   doc.moveDown(0.5);
   for (const skill of record.skills) {
     const y = doc.y;
-    doc.font('text').fontSize(10.5).fillColor(INK.ink).text(skill.label, doc.page.margins.left, y, { width: width * 0.55 });
+    doc
+      .font('text')
+      .fontSize(10.5)
+      .fillColor(INK.ink)
+      .text(skill.label, doc.page.margins.left, y, { width: width * 0.55 });
     const afterLabel = doc.y;
     const signed = skill.signOff ? `${longDate(skill.signOff.at)} · ${skill.signOff.by.name}` : 'not signed off';
     doc
@@ -78,16 +82,28 @@ export async function certificatePdf(
   const top = doc.y;
   const qrSize = 110;
   const left = doc.page.margins.left;
-  doc.font('text').fontSize(10.5).fillColor(INK.ink).text(`Issued on ${longDate(certificate.issuedAt)}`, left, top);
+  doc
+    .font('text')
+    .fontSize(10.5)
+    .fillColor(INK.ink)
+    .text(`Issued on ${longDate(certificate.issuedAt)}`, left, top);
   doc.moveDown(0.4);
   doc.font('text').fontSize(10).fillColor(INK.muted).text('Certificate code');
-  doc.font('mono').fontSize(13).fillColor(INK.ink).text(certificate.code);
+  monoText(doc.fontSize(13).fillColor(INK.ink), certificate.code);
   doc.moveDown(0.4);
-  doc.font('text').fontSize(9.5).fillColor(INK.muted).text('Anyone may check it at', { width: width - qrSize - 16 });
-  doc.font('mono').fontSize(9).fillColor(INK.ink).text(link, { width: width - qrSize - 16 });
+  doc
+    .font('text')
+    .fontSize(9.5)
+    .fillColor(INK.muted)
+    .text('Anyone may check it at', { width: width - qrSize - 16 });
+  monoText(doc.fontSize(9).fillColor(INK.ink), link, { width: width - qrSize - 16 });
   if (certificate.revokedAt) {
     doc.moveDown(0.6);
-    doc.font('text').fontSize(11).fillColor('#a1262b').text(`Revoked on ${longDate(certificate.revokedAt)}.`);
+    doc
+      .font('text')
+      .fontSize(11)
+      .fillColor('#a1262b')
+      .text(`Revoked on ${longDate(certificate.revokedAt)}.`);
   }
   drawQrCode(doc, link, left + width - qrSize, top, qrSize);
   doc.end();

@@ -160,10 +160,7 @@ export async function gatherCourseEvidence(
   const newestFirst = (a: EvidenceItem, b: EvidenceItem) => b.date.localeCompare(a.date) || b.id - a.id;
   for (const [key, lessonIds] of lessonsOfSkill) {
     const items = [...found.values()].filter((f) => [...f.lessonIds].some((id) => lessonIds.has(id)));
-    bySkill.set(
-      key,
-      items.map((f) => f.item).sort(newestFirst),
-    );
+    bySkill.set(key, items.map((f) => f.item).sort(newestFirst));
     minutesBySkill.set(
       key,
       entries.filter((e) => lessonIds.has(Number(e.lessonId))).reduce((sum, e) => sum + Number(e.minutes), 0),

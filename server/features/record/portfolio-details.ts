@@ -84,10 +84,19 @@ export async function portfolioDetails(record: ApprenticeRecord): Promise<Portfo
     });
   }
 
-  const links = await LogEntryUpload.findAll({ where: { entryId: { [Op.in]: entryIds } }, order: [['position', 'ASC']] });
+  const links = await LogEntryUpload.findAll({
+    where: { entryId: { [Op.in]: entryIds } },
+    order: [['position', 'ASC']],
+  });
   const uploads = await Upload.findAll({ where: { id: { [Op.in]: links.map((l) => l.uploadId) } } });
   for (const entryId of entryIds) {
-    const grade = await LogGrade.findOne({ where: { entryId }, order: [['createdAt', 'DESC'], ['id', 'DESC']] });
+    const grade = await LogGrade.findOne({
+      where: { entryId },
+      order: [
+        ['createdAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
+    });
     entries.set(entryId, {
       comment: grade?.comment ?? '',
       photos: links

@@ -2,7 +2,7 @@ import { existsSync } from 'node:fs';
 import { SCORE_WORDS, formatScore } from '@shared/grading/score';
 import { formatMinutes } from '@shared/schemas/log-entry';
 import type { ApprenticeRecord, EvidenceItem, RecordCourse } from '@shared/schemas/record';
-import { createPdf, INK } from '../../lib/pdf';
+import { createPdf, INK, monoText } from '../../lib/pdf';
 import { uploadFile } from '../uploads/upload-files';
 import type { PortfolioDetails } from './portfolio-details';
 
@@ -43,14 +43,18 @@ export function portfolioPdf(
     doc.font('heading').fontSize(size).fillColor(INK.ink).text(text, left, doc.y, { width });
     doc.moveDown(0.3);
   };
-  const line = (text: string, font: 'text' | 'strong' | 'mono' = 'text', color = INK.ink, size = 10) => {
+  const line = (text: string, font: 'text' | 'strong' = 'text', color = INK.ink, size = 10) => {
     doc.font(font).fontSize(size).fillColor(color).text(text, left, doc.y, { width });
   };
 
   doc.font('heading').fontSize(13).fillColor(INK.brass).text(guild);
   doc.moveDown(0.4);
   doc.font('heading').fontSize(26).fillColor(INK.ink).text(`Portfolio of ${record.apprentice.name}`);
-  line(`Prepared on ${shortDate(new Date().toISOString())}. Photos are in the photos folder beside this file.`, 'text', INK.muted);
+  line(
+    `Prepared on ${shortDate(new Date().toISOString())}. Photos are in the photos folder beside this file.`,
+    'text',
+    INK.muted,
+  );
   doc.moveDown(1);
 
   const shown = new Map<string, string>();
@@ -101,7 +105,8 @@ export function portfolioPdf(
     const piece = item.kind === 'submission' ? details.pieces.get(item.id) : undefined;
     const entry = item.kind === 'log-entry' ? details.entries.get(item.id) : undefined;
     if (piece?.review) {
-      for (const c of piece.review.scores) line(`   ${c.label}: ${c.score} (${SCORE_WORDS[c.score]})`, 'text', INK.ink, 9.5);
+      for (const c of piece.review.scores)
+        line(`   ${c.label}: ${c.score} (${SCORE_WORDS[c.score]})`, 'text', INK.ink, 9.5);
       if (piece.review.comment) line(`   ${piece.review.mentor}: ${piece.review.comment}`, 'text', INK.muted, 9.5);
       for (const pin of piece.review.pins) line(`   Pin ${pin.number}: ${pin.note}`, 'text', INK.muted, 9.5);
     }
@@ -119,10 +124,14 @@ export function portfolioPdf(
         const x = left + pin.x * w;
         const y = top + pin.y * h;
         doc.circle(x, y, 8).fillAndStroke(INK.brass, '#ffffff');
-        doc.font('strong').fontSize(8).fillColor('#ffffff').text(String(pin.number), x - 8, y - 4, {
-          width: 16,
-          align: 'center',
-        });
+        doc
+          .font('strong')
+          .fontSize(8)
+          .fillColor('#ffffff')
+          .text(String(pin.number), x - 8, y - 4, {
+            width: 16,
+            align: 'center',
+          });
       }
       doc.y = top + h + 2;
       line(`${photo.caption ? `${photo.caption} · ` : ''}photos/${photo.name}`, 'text', INK.muted, 8.5);
@@ -139,8 +148,15 @@ export function portfolioPdf(
     for (const week of hours.weeks) {
       room(14);
       const y = doc.y;
-      doc.font('text').fontSize(9.5).fillColor(INK.ink).text(`Week of ${shortDate(week.weekStart)}`, left, y);
-      doc.font('mono').fontSize(9.5).text(formatMinutes(week.minutes), left + 160, y);
+      doc
+        .font('text')
+        .fontSize(9.5)
+        .fillColor(INK.ink)
+        .text(`Week of ${shortDate(week.weekStart)}`, left, y);
+      doc.x = left + 160;
+      doc.y = y;
+      monoText(doc.fontSize(9.5), formatMinutes(week.minutes));
+      doc.x = left;
       doc.y = y + 13;
     }
     line(

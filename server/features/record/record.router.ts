@@ -41,10 +41,7 @@ export function apprenticesRouter({ sequelize, config, mailer, logger }: AppDeps
       res.destroy(err);
     });
     res.setHeader('Content-Type', 'application/zip');
-    res.setHeader(
-      'Content-Disposition',
-      `attachment; filename="portfolio-${fileSafe(record.apprentice.name)}.zip"`,
-    );
+    res.setHeader('Content-Disposition', `attachment; filename="portfolio-${fileSafe(record.apprentice.name)}.zip"`);
     zip.pipe(res);
     zip.append(pdf, { name: 'portfolio.pdf' });
     for (const photo of details.photos)

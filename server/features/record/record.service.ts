@@ -26,7 +26,8 @@ const MAX_WEEKS = 104;
  * a class the apprentice is actively enrolled in (and then only that class's course). Anyone else is told 404.
  */
 export async function readableRecord(viewer: UserDTO, apprenticeId: number) {
-  const apprentice = apprenticeId > 0 ? await User.findByPk(apprenticeId, { attributes: ['id', 'name', 'role'] }) : null;
+  const apprentice =
+    apprenticeId > 0 ? await User.findByPk(apprenticeId, { attributes: ['id', 'name', 'role'] }) : null;
   if (!apprentice || apprentice.role !== 'apprentice') throw AppError.notFound('That record');
   const reach = await reachableCourseIds(viewer, apprenticeId);
   if (reach !== 'all' && reach.length === 0) throw AppError.notFound('That record');
@@ -56,7 +57,10 @@ export async function apprenticeRecord(
 
 export async function courseRecord(sequelize: Sequelize, apprenticeId: number, course: Course): Promise<RecordCourse> {
   const evidence = await gatherCourseEvidence(sequelize, apprenticeId, course.id);
-  const signOffs = await SignOff.findAll({ where: { apprenticeId, courseId: course.id }, order: [['createdAt', 'ASC']] });
+  const signOffs = await SignOff.findAll({
+    where: { apprenticeId, courseId: course.id },
+    order: [['createdAt', 'ASC']],
+  });
   const people = await User.findAll({
     where: { id: { [Op.in]: signOffs.flatMap((s) => [s.mentorId, s.withdrawnById ?? s.mentorId]) } },
     attributes: ['id', 'name'],

@@ -70,7 +70,8 @@ function parseCmap(text: string): Map<number, string> {
       const start = parseInt(m[1], 16);
       const end = parseInt(m[2], 16);
       if (m[3].startsWith('[')) {
-        [...m[3].matchAll(/<([0-9a-fA-F]+)>/g)].forEach((u, i) => map.set(start + i, utf16(u[1])));
+        // A ligature maps to several characters, written with spaces between them: <0066 0069>.
+        [...m[3].matchAll(/<([0-9a-fA-F\s]+)>/g)].forEach((u, i) => map.set(start + i, utf16(u[1].replace(/\s/g, ''))));
       } else {
         const first = parseInt(m[3].slice(1, -1), 16);
         for (let code = start; code <= end; code++) map.set(code, String.fromCharCode(first + code - start));
@@ -78,7 +79,8 @@ function parseCmap(text: string): Map<number, string> {
     }
   }
   for (const block of text.matchAll(/beginbfchar([\s\S]*?)endbfchar/g)) {
-    for (const m of block[1].matchAll(/<([0-9a-fA-F]+)>\s*<([0-9a-fA-F]+)>/g)) map.set(parseInt(m[1], 16), utf16(m[2]));
+    for (const m of block[1].matchAll(/<([0-9a-fA-F]+)>\s*<([0-9a-fA-F\s]+)>/g))
+      map.set(parseInt(m[1], 16), utf16(m[2].replace(/\s/g, '')));
   }
   return map;
 }

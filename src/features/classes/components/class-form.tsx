@@ -58,7 +58,9 @@ export function ClassFormFields({ initial, submitLabel, busy, error, onSubmit, o
         capacity: initial ? String(initial.capacity) : '12',
         mentorIds: initial?.mentors.map((m) => m.id) ?? [],
         requiredHoursPerWeek:
-          initial?.requiredMinutesPerWeek != null ? String(Math.round((initial.requiredMinutesPerWeek / 60) * 100) / 100) : '',
+          initial?.requiredMinutesPerWeek != null
+            ? String(Math.round((initial.requiredMinutesPerWeek / 60) * 100) / 100)
+            : '',
       },
     },
   );
