@@ -28,4 +28,7 @@ export const paths = {
   invitations: '/guild-office/invitations',
   activity: '/guild-office/activity',
   acceptInvitation: (token: string) => `/invitation/${token}`,
+  myRecord: '/record',
+  apprenticeRecord: (id: number) => `/apprentices/${id}/record`,
+  verify: (code: string) => `/verify/${encodeURIComponent(code)}`,
 } as const;
