@@ -24,10 +24,12 @@ export function Component() {
         )}
         {error && !unknown && <ErrorNotice error={error} title="The check could not be made" />}
         {data && (
+          <p className={`mb-3 text-xl font-semibold ${data.valid ? 'text-ink' : 'text-error'}`}>
+            {data.valid ? 'Valid certificate' : 'This certificate has been revoked'}
+          </p>
+        )}
+        {data && (
           <dl className="space-y-3">
-            <p className={`text-xl font-semibold ${data.valid ? 'text-ink' : 'text-error'}`}>
-              {data.valid ? 'Valid certificate' : 'This certificate has been revoked'}
-            </p>
             <div>
               <dt className="text-sm text-muted">Issued by</dt>
               <dd>{data.guild}</dd>

@@ -5,7 +5,7 @@ const LOOK: Record<SkillStatus, { label: string; className: string }> = {
   'not-started': { label: 'Not started', className: 'border-rule bg-paper text-muted' },
   gathering: { label: 'Gathering evidence', className: 'border-steel/40 bg-steel/10 text-steel' },
   ready: { label: 'Ready for sign-off', className: 'border-brass bg-card text-brass-dark' },
-  'signed-off': { label: 'Signed off', className: 'border-brass bg-brass text-white' },
+  'signed-off': { label: 'Signed off', className: 'border-brass-dark bg-brass-dark text-white' },
 };
 
 export function SkillStatusBadge({ status }: { status: SkillStatus }) {
