@@ -62,7 +62,7 @@ export const RecordSkill = z.object({
 });
 export type RecordSkill = z.infer<typeof RecordSkill>;
 
-export const WeekHours = z.object({ weekStart: z.string(), minutes: z.number().int() });
+const WeekHours = z.object({ weekStart: z.string(), minutes: z.number().int() });
 
 /** Bench time per week since the class began, against what the class asks for. */
 export const HoursAgainstClass = z.object({
@@ -94,8 +94,9 @@ export type ApprenticeRecord = z.infer<typeof ApprenticeRecord>;
 export const SignOffInput = z.object({
   courseId: Id,
   skillKey: z.string().trim().min(1).max(80),
-  note: z.string().trim().min(1, 'Say in a line what you saw.').max(2000),
-  evidence: z.array(EvidenceRef).max(50),
+  // Both default to empty so that a sign-off sent without them is refused for what matters first: no evidence (422).
+  note: z.string().trim().max(2000).default(''),
+  evidence: z.array(EvidenceRef).max(50).default([]),
 });
 export type SignOffInput = z.infer<typeof SignOffInput>;
 

@@ -108,6 +108,14 @@ describe('sign-offs', () => {
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe('EVIDENCE_REQUIRED');
     expect(res.body.error.fields.evidence).toHaveLength(1);
+    const bare = await a.mentor.agent
+      .post(`/api/apprentices/${a.apprentice.user.id}/sign-offs`)
+      .send({ courseId: a.course.id, skillKey: 'plate-layout' });
+    expect([bare.status, bare.body.error.code]).toEqual([422, 'EVIDENCE_REQUIRED']);
+    const noNote = await a.mentor.agent
+      .post(`/api/apprentices/${a.apprentice.user.id}/sign-offs`)
+      .send({ courseId: a.course.id, skillKey: 'plate-layout', evidence: [{ kind: 'submission', id: a.passed.id }] });
+    expect([noNote.status, noNote.body.error.fields.note]).toEqual([400, ['Say in a line what you saw.']]);
     expect(await SignOff.count({ where: { apprenticeId: a.apprentice.user.id } })).toBe(0);
   });
 

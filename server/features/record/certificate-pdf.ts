@@ -9,7 +9,7 @@ import { courseRecord } from './record.service';
 const longDate = (d: Date | string) =>
   new Date(d).toLocaleDateString('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
-export const verifyLink = (appUrl: string, code: string) => `${appUrl}/verify/${code}`;
+const verifyLink = (appUrl: string, code: string) => `${appUrl}/verify/${code}`;
 
 /**
  * The certificate as a one-page PDF: the guild, the apprentice, the course, each skill with the date and mentor of its

@@ -28,7 +28,7 @@ export function newCertificateCode(): string {
 }
 
 /** What stands between the apprentice and a certificate: skills not signed off, projects not passed. */
-export async function missingForCertificate(apprenticeId: number, course: Course) {
+async function missingForCertificate(apprenticeId: number, course: Course) {
   const signed = await SignOff.findAll({
     where: { apprenticeId, courseId: course.id, withdrawnAt: null },
     attributes: ['skillKey'],

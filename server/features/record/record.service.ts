@@ -25,7 +25,7 @@ const MAX_WEEKS = 104;
  * The apprentice an id names, when the viewer may read their record: the apprentice, the guild office, or a mentor of
  * a class the apprentice is actively enrolled in (and then only that class's course). Anyone else is told 404.
  */
-export async function readableRecord(viewer: UserDTO, apprenticeId: number) {
+async function readableRecord(viewer: UserDTO, apprenticeId: number) {
   const apprentice =
     apprenticeId > 0 ? await User.findByPk(apprenticeId, { attributes: ['id', 'name', 'role'] }) : null;
   if (!apprentice || apprentice.role !== 'apprentice') throw AppError.notFound('That record');

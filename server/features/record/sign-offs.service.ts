@@ -67,6 +67,11 @@ export async function signOff(
     if (!input.evidence.some((e) => isPassedPiece(offered.get(evidenceKey(e))!)))
       throw evidenceRequired('A sign-off rests on at least one passed piece for this skill; choose one.');
 
+    if (!input.note) {
+      const message = 'Say in a line what you saw.';
+      throw AppError.badRequest(message, { note: [message] });
+    }
+
     const unique = [...new Map(input.evidence.map((e) => [evidenceKey(e), { kind: e.kind, id: e.id }])).values()];
     const row = await SignOff.create(
       {
