@@ -25,7 +25,14 @@ test('when a visitor opens the home page, then the styled sign-in screen appears
 test('when each demo role signs in, then the navigation shows only that role’s areas', async ({ page }) => {
   await signIn(page, demo.ned);
   const nav = page.getByRole('navigation', { name: 'Main' });
-  await expect(nav.getByRole('link')).toHaveText(['Today', 'Courses', 'Calculators', 'Bench log', 'My pieces']);
+  await expect(nav.getByRole('link')).toHaveText([
+    'Today',
+    'Courses',
+    'Calculators',
+    'Bench log',
+    'My pieces',
+    'My record',
+  ]);
   await page.getByRole('button', { name: 'Sign out' }).click();
   await signIn(page, demo.odile);
   await expect(nav.getByRole('link')).toHaveText([/Today/, /To review/, 'Classes', 'Courses', 'Calculators']);

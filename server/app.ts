@@ -24,6 +24,8 @@ import { reviewsRouter } from './features/reviews/reviews.router';
 import { submissionsRouter } from './features/submissions/submissions.router';
 import { uploadsRouter } from './features/uploads/uploads.router';
 import { clientFiles } from './lib/client-files';
+import { certificatesRouter, verifyRouter } from './features/record/certificates.router';
+import { apprenticesRouter, signOffsRouter } from './features/record/record.router';
 import { apiNotFound, errorHandler } from './lib/error-handler';
 import { httpLogger, type Logger } from './lib/logger';
 import { rejectBadAddress, rejectBadBody } from './lib/text-guard';
@@ -93,6 +95,10 @@ export function createApp(deps: AppDeps) {
   api.use('/notifications', notificationsRouter());
   api.use('/outbox', outboxRouter());
   api.use('/log-entries', logEntriesRouter(deps));
+  api.use('/apprentices', apprenticesRouter(deps));
+  api.use('/sign-offs', signOffsRouter(deps));
+  api.use('/certificates', certificatesRouter(deps));
+  api.use('/verify', verifyRouter(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -17,6 +17,7 @@ const EnvSchema = z.object({
   SESSION_SECRET: z.string().min(16, 'must be at least 16 characters').optional(),
   SMTP_URL: z.url({ protocol: /^smtps?$/ }).optional(),
   MAIL_FROM: z.string().default('Tickwright <no-reply@saltmarsh-guild.test>'),
+  GUILD_NAME: z.string().trim().min(2, 'must name the guild').max(120).default('Saltmarsh Guild of Clockmakers'),
   DEV_SMTP_PORT: port.default(1025),
   DEV_MAIL_WEB_PORT: port.default(1080),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
@@ -37,6 +38,8 @@ export interface Config {
   /** Unset: a local fake SMTP service (maildev) is started and used. */
   smtpUrl?: string;
   mailFrom: string;
+  /** The guild that issues certificates, printed on them and named by the public check. */
+  guildName: string;
   devSmtpPort: number;
   devMailWebPort: number;
   logLevel: string;
@@ -65,6 +68,7 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
     sessionSecret: env.SESSION_SECRET ?? persistentSecret(dataDir),
     smtpUrl: env.SMTP_URL,
     mailFrom: env.MAIL_FROM,
+    guildName: env.GUILD_NAME,
     devSmtpPort: env.DEV_SMTP_PORT,
     devMailWebPort: env.DEV_MAIL_WEB_PORT,
     logLevel: env.LOG_LEVEL,

@@ -9,6 +9,7 @@ import * as m0006 from './migrations/0006-bench-log';
 import * as m0007 from './migrations/0007-invitations-audit';
 import * as m0008 from './migrations/0008-outbox';
 import * as m0009 from './migrations/0009-idempotency-keys';
+import * as m0010 from './migrations/0010-apprentice-record';
 
 export type Migration = {
   up: (ctx: { context: QueryInterface }) => Promise<void>;
@@ -26,6 +27,7 @@ const migrations: Record<string, Migration> = {
   '0007-invitations-audit': m0007,
   '0008-outbox': m0008,
   '0009-idempotency-keys': m0009,
+  '0010-apprentice-record': m0010,
 };
 
 export function createMigrator(sequelize: Sequelize) {

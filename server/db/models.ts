@@ -15,6 +15,7 @@ import { initReviewModels } from '../features/reviews/review.model';
 import { initSubmissionModels } from '../features/submissions/submission.model';
 import { Upload } from '../features/uploads/upload.model';
 import { initLessonProgressModel } from '../features/courses/lesson-progress.model';
+import { initRecordModels } from '../features/record/record.model';
 
 /** Every model is initialised here, once per Sequelize instance; each feature registers its own in one line. */
 export function initModels(sequelize: Sequelize) {
@@ -34,4 +35,5 @@ export function initModels(sequelize: Sequelize) {
   initBenchLogModels(sequelize);
   OutboxMessage.initModel(sequelize);
   IdempotencyKey.initModel(sequelize);
+  initRecordModels(sequelize);
 }

@@ -4,7 +4,7 @@ import sharp from 'sharp';
  * Stand-in workshop photographs for the demo, drawn as SVG and rendered by sharp: no real photographs exist of the
  * invented guild's work. Each kind shows what its project asks to be photographed, roughly.
  */
-export type DemoPhotoKind = 'holes' | 'arbor' | 'pivots' | 'plates' | 'click';
+export type DemoPhotoKind = 'holes' | 'arbor' | 'pivots' | 'plates' | 'click' | 'strip';
 
 const W = 1600;
 const H = 1200;
@@ -66,6 +66,13 @@ const scenes: Record<DemoPhotoKind, (v: number) => string> = {
   click: (v) =>
     `<path d="M520 640 L900 ${420 + v * 6} Q1000 400 1040 470 L1010 520 Q940 520 880 560 L600 720 Z" fill="url(#steel)" stroke="#333" stroke-width="4"/>` +
     `<circle cx="560" cy="680" r="60" fill="url(#steel)" stroke="#333" stroke-width="4"/><circle cx="560" cy="680" r="18" fill="#111"/>` +
+    rule(1000),
+  // A strip run from pale straw through brown and purple to blue, as a tempered strip shows its colours.
+  strip: (v) =>
+    ['#e9d9a6', '#d9b867', '#b7803c', '#8a4f3a', '#6b3f6e', '#3d4f8f', '#5f7fb0']
+      .map((c, i) => `<rect x="${220 + i * 165}" y="${460 + v * 4}" width="166" height="150" fill="${c}"/>`)
+      .join('') +
+    `<rect x="220" y="${460 + v * 4}" width="1155" height="150" fill="none" stroke="#333" stroke-width="4"/>` +
     rule(1000),
 };
 

@@ -28,6 +28,8 @@ export const DEMO_PEOPLE: DemoPerson[] = [
   { key: 'caspian', name: 'Caspian Merryweather', role: 'apprentice', cls: 'spring' },
   { key: 'linnet', name: 'Linnet Sowerby', role: 'apprentice', cls: 'spring' },
   { key: 'hollis', name: 'Hollis Dunstable', role: 'apprentice', cls: 'spring' },
+  // Finished "Springs and Heat Treatment" in an earlier class (EARLIER_CLASS), enrolled there by seed-record.
+  { key: 'morwenna', name: 'Morwenna Trelease', role: 'apprentice' },
 ];
 
 export const demoEmail = (key: string) => `${key}@${DEMO_DOMAIN}`;
@@ -48,3 +50,17 @@ export const DEMO_CLASSES = {
     capacity: 10,
   },
 } as const;
+
+/** An earlier class, archived since it ended: its apprentice holds the demo's certificate. */
+export const EARLIER_CLASS = {
+  name: 'Spring Bench 2026',
+  course: 'springs-heat-treatment',
+  startsOn: '2026-03-02',
+  endsOn: '2026-06-26',
+  capacity: 8,
+  mentor: 'bram',
+  apprentice: 'morwenna',
+} as const;
+
+/** Bench time each demo class asks for per week, in minutes (an invented figure for the demo). */
+export const REQUIRED_MINUTES_PER_WEEK = 480;

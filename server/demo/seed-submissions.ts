@@ -25,7 +25,7 @@ interface DemoVersion {
     pins: [number, number, number, string][];
   };
 }
-interface DemoPiece {
+export interface DemoPiece {
   who: string;
   course: keyof typeof DEMO_CLASSES;
   lesson: string;
@@ -160,7 +160,7 @@ const PIECES: DemoPiece[] = [
   },
 ];
 
-const daysAgo = (n: number) => new Date(Date.now() - n * 24 * 60 * 60 * 1000);
+export const daysAgo = (n: number) => new Date(Date.now() - n * 24 * 60 * 60 * 1000);
 
 async function stamp(sequelize: Sequelize, table: string, id: number, fields: Record<string, Date>) {
   const sets = Object.keys(fields)
@@ -174,9 +174,14 @@ async function stamp(sequelize: Sequelize, table: string, id: number, fields: Re
  * pivot holes sent back for rework with two pins. Idempotent: a piece that exists is left alone.
  */
 export async function seedSubmissions(sequelize: Sequelize): Promise<void> {
+  await seedPieces(sequelize, PIECES);
+}
+
+/** Creates each piece with its versions, photos, reviews and pins, unless the apprentice already has one for it. */
+export async function seedPieces(sequelize: Sequelize, pieces: DemoPiece[]): Promise<void> {
   // The photos go beside the database, in the same data folder the running app serves them from.
   const dataDir = path.dirname(String((sequelize as unknown as { options: { storage: string } }).options.storage));
-  for (const piece of PIECES) {
+  for (const piece of pieces) {
     const apprentice = await User.findOne({ where: { email: demoEmail(piece.who) } });
     const course = await Course.findOne({ where: { slug: DEMO_CLASSES[piece.course].course } });
     const lesson = course && (await Lesson.findOne({ where: { courseId: course.id, slug: piece.lesson } }));

@@ -8,6 +8,7 @@ import { DEMO_CLASSES, DEMO_PASSWORD, DEMO_PEOPLE, demoEmail } from './people';
 import { seedBenchLog } from './seed-bench-log';
 import { seedClasses } from './seed-classes';
 import { seedLessonProgress } from './seed-lesson-progress';
+import { seedRecord } from './seed-record';
 
 /**
  * Loads the demo scenario. Idempotent: every row is found by a natural key before it is created, so a second run
@@ -55,4 +56,5 @@ const FEATURE_SEEDS: ((sequelize: Sequelize) => Promise<void>)[] = [
   seedBenchLog,
   seedSubmissions,
   seedLessonProgress,
+  seedRecord,
 ];

@@ -22,6 +22,8 @@ const TOKEN_PATHS: RegExp[] = [
   /^(\/api\/invitations\/)(?!\d+(?:[/?#]|$))[^/?#]+/,
   /^(\/reset-password\/)[^/?#]+/,
   /^(\/invitation\/)[^/?#]+/,
+  /^(\/api\/verify\/)[^/?#]+/,
+  /^(\/verify\/)[^/?#]+/,
 ];
 
 /** The URL as it may appear in a log: any link token replaced by ":token", the query kept. */

@@ -19,11 +19,15 @@ export const AUDIT_ACTIONS = [
   'user.role-changed',
   'user.deactivated',
   'user.reactivated',
+  'sign-off.recorded',
+  'sign-off.withdrawn',
+  'certificate.issued',
+  'certificate.revoked',
 ] as const;
 export const AuditAction = z.enum(AUDIT_ACTIONS);
 export type AuditAction = z.infer<typeof AuditAction>;
 
-export const AuditTargetType = z.enum(['class', 'invitation', 'user', 'enrolment']);
+export const AuditTargetType = z.enum(['class', 'invitation', 'user', 'enrolment', 'sign-off', 'certificate']);
 export type AuditTargetType = z.infer<typeof AuditTargetType>;
 
 export const AuditEventDTO = z.object({

@@ -11,6 +11,13 @@ const Day = z.iso.date('Enter a date as YYYY-MM-DD.');
 const Id = z.int().check(z.positive());
 const MentorIds = z.array(Id).check(z.maxLength(20, 'At most 20 mentors.'));
 
+const RequiredMinutes = z
+  .int('Give whole minutes.')
+  .check(
+    z.gte(1, 'Ask for at least 1 minute a week, or leave it empty.'),
+    z.lte(7 * 24 * 60, 'A week has 10 080 minutes.'),
+  );
+
 const classFields = {
   name: z.string().check(z.trim(), z.minLength(2, 'Give the class a name of at least 2 characters.'), z.maxLength(120)),
   courseId: Id,
@@ -20,6 +27,8 @@ const classFields = {
     .int()
     .check(z.gte(1, 'A class has room for at least 1 apprentice.'), z.lte(500, 'At most 500 apprentices.')),
   mentorIds: z._default(MentorIds, []),
+  /** Bench time asked of each apprentice per week, in minutes; null for none. */
+  requiredMinutesPerWeek: z._default(z.nullable(RequiredMinutes), null),
 };
 
 const endsAfterStart = (v: { startsOn?: string; endsOn?: string }) =>
@@ -31,7 +40,14 @@ export type ClassCreateInput = z.infer<typeof ClassCreateInput>;
 
 /** Any subset of the fields; `archived` archives (true) or brings back (false) the class. */
 export const ClassUpdateInput = z
-  .partial(z.object({ ...classFields, mentorIds: MentorIds, archived: z.boolean() }))
+  .partial(
+    z.object({
+      ...classFields,
+      mentorIds: MentorIds,
+      requiredMinutesPerWeek: z.nullable(RequiredMinutes),
+      archived: z.boolean(),
+    }),
+  )
   .check(z.refine(endsAfterStart, endsAfterStartIssue));
 export type ClassUpdateInput = z.infer<typeof ClassUpdateInput>;
 
@@ -63,6 +79,7 @@ export const ClassDTO = z.object({
   startsOn: z.string(),
   endsOn: z.string(),
   capacity: z.int(),
+  requiredMinutesPerWeek: z.nullable(z.int()),
   archived: z.boolean(),
   archivedAt: z.nullable(z.string()),
   mentors: z.array(PersonRef),

@@ -4,7 +4,12 @@ import * as z from 'zod/mini';
 const Key = z.string().check(z.regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'use kebab-case (a-z, 0-9 and dashes)'));
 const Text = z.string().check(z.minLength(1));
 
-export const Skill = z.object({ key: Key, label: Text });
+export const Skill = z.object({
+  key: Key,
+  label: Text,
+  /** What a mentor must see before signing the skill off: one or two sentences. content:check requires it. */
+  standard: z.optional(z.string().check(z.trim(), z.minLength(1), z.maxLength(600))),
+});
 export type Skill = z.infer<typeof Skill>;
 
 export const ProjectCriterion = z.object({

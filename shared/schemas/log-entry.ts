@@ -17,6 +17,19 @@ export function localToday(now = new Date()): string {
   return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
 }
 
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+/** Calendar arithmetic on YYYY-MM-DD strings, done in UTC so that no daylight-saving change moves a day. */
+export function addDays(date: string, days: number): string {
+  return new Date(Date.parse(`${date}T00:00:00Z`) + days * DAY_MS).toISOString().slice(0, 10);
+}
+
+/** Weeks run Monday to Sunday, as a working week at the bench does. */
+export function mondayOf(date: string): string {
+  const weekday = new Date(`${date}T00:00:00Z`).getUTCDay();
+  return addDays(date, -((weekday + 6) % 7));
+}
+
 /** Time spent the way the bench says it: "2 h 30 min", "45 min", "3 h". */
 export function formatMinutes(total: number): string {
   const h = Math.floor(total / 60);

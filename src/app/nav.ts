@@ -18,6 +18,7 @@ export const NAV: Record<Role, NavItem[]> = {
     { label: 'Calculators', to: paths.calculators },
     { label: 'Bench log', to: paths.benchLog },
     { label: 'My pieces', to: paths.myPieces },
+    { label: 'My record', to: paths.myRecord },
   ],
   mentor: [
     { label: 'Today', to: paths.home },

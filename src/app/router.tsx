@@ -51,6 +51,12 @@ export const router = createBrowserRouter([
     hydrateFallbackElement: opening,
   },
   {
+    path: '/verify/:code',
+    lazy: () => import('./routes/verify'),
+    errorElement: <RouteError />,
+    hydrateFallbackElement: opening,
+  },
+  {
     element: <AppShell />,
     errorElement: <RouteError />,
     hydrateFallbackElement: opening,
@@ -85,6 +91,8 @@ export const router = createBrowserRouter([
       { path: 'review', lazy: () => import('./routes/review/review-queue') },
       { path: 'review/:submissionId', lazy: () => import('./routes/review/review-piece') },
       { path: 'notifications', lazy: () => import('./routes/notifications') },
+      { path: 'record', lazy: () => import('./routes/record/my-record') },
+      { path: 'apprentices/:id/record', lazy: () => import('./routes/record/apprentice-record') },
       { path: '*', lazy: () => import('./routes/not-found') },
     ],
   },

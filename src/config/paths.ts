@@ -29,4 +29,7 @@ export const paths = {
   activity: '/guild-office/activity',
   outgoingMail: '/guild-office/mail',
   acceptInvitation: (token: string) => `/invitation/${token}`,
+  myRecord: '/record',
+  apprenticeRecord: (id: number) => `/apprentices/${id}/record`,
+  verify: (code: string) => `/verify/${encodeURIComponent(code)}`,
 } as const;

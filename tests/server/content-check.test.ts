@@ -54,6 +54,27 @@ describe('content check', () => {
     expect(report.lessons).toBeGreaterThanOrEqual(14);
   });
 
+  it('when a skill has no standard, or no lesson with a project teaches it, then both are reported against course.md', () => {
+    const dir = contentCopy();
+    const course = path.join(dir, 'springs-heat-treatment', 'course.md');
+    edit(course, (s) => s.replace(/(key: click-making\n\s+label: [^\n]+\n)\s+standard: >-\n(\s{6}[^\n]+\n)+/, '$1'));
+    // The torque lesson is the only one with a project that teaches torque-evening.
+    edit(path.join(dir, 'springs-heat-treatment', '07-adjusting-rod-and-evening-the-torque.md'), (s) =>
+      s.replace(
+        'skills: [torque-evening, fusee-layout, mainspring-handling]',
+        'skills: [fusee-layout, mainspring-handling]',
+      ),
+    );
+    const messages = checkContent(dir, CALCULATOR_NAMES).problems.map((p) => `${path.basename(p.file)}: ${p.message}`);
+    expect(messages).toContain(
+      'course.md: skill "click-making" has no standard: say in a sentence or two what a mentor must see to sign it off',
+    );
+    expect(messages).toContain(
+      'course.md: skill "torque-evening" is taught by no lesson with a project: a sign-off needs a piece to judge',
+    );
+    expect(messages).toHaveLength(2);
+  });
+
   it('when a lesson names an unknown calculator, then the problem names the file and the directive’s line', () => {
     const dir = contentCopy();
     const file = path.join(dir, BROACHING);

@@ -33,12 +33,18 @@ const addressOf = (req: Request): string | null => {
   const email: unknown = req.body?.email;
   return typeof email === 'string' && email.trim() ? email.trim().toLowerCase() : null;
 };
-const clientOf = (req: Request) => ipKeyGenerator(req.ip ?? 'unknown');
+export const clientOf = (req: Request) => ipKeyGenerator(req.ip ?? 'unknown');
 
 type Window = { windowMs: number; limit: number };
 type Key = (req: Request) => string | null;
 
-function limiter(window: Window, key: Key, onlyFailures: boolean, refuse: (wait: string) => string): RequestHandler {
+/** One limit in the app's error shape (429, Retry-After); also used by other public routes (the certificate check). */
+export function limiter(
+  window: Window,
+  key: Key,
+  onlyFailures: boolean,
+  refuse: (wait: string) => string,
+): RequestHandler {
   return rateLimit({
     ...window,
     skipSuccessfulRequests: onlyFailures,

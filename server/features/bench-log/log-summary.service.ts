@@ -1,6 +1,8 @@
 import { Op, QueryTypes, type Sequelize } from 'sequelize';
 import {
+  addDays,
   localToday,
+  mondayOf,
   type LogApprentices,
   type LogEntriesToRead,
   type LogSummary,
@@ -10,19 +12,6 @@ import type { UserDTO } from '@shared/schemas/user';
 import { User } from '../auth/user.model';
 import { logEntryReachSql, visibleApprenticeIds } from '../classes/access';
 import { logOwner } from './log-entries.service';
-
-const DAY_MS = 24 * 60 * 60 * 1000;
-
-/** Calendar arithmetic on YYYY-MM-DD strings, done in UTC so that no daylight-saving change moves a day. */
-function addDays(date: string, days: number): string {
-  return new Date(Date.parse(`${date}T00:00:00Z`) + days * DAY_MS).toISOString().slice(0, 10);
-}
-
-/** Weeks run Monday to Sunday, as a working week at the bench does. */
-function mondayOf(date: string): string {
-  const weekday = new Date(`${date}T00:00:00Z`).getUTCDay();
-  return addDays(date, -((weekday + 6) % 7));
-}
 
 export async function logSummary(sequelize: Sequelize, viewer: UserDTO, query: LogSummaryQuery): Promise<LogSummary> {
   const apprenticeId = await logOwner(viewer, query.apprentice);

@@ -31,6 +31,7 @@ export async function toClassDTOs(classes: GuildClass[], transaction?: Transacti
       startsOn: cls.startsOn,
       endsOn: cls.endsOn,
       capacity: cls.capacity,
+      requiredMinutesPerWeek: cls.requiredMinutesPerWeek ?? null,
       archived: cls.archivedAt != null,
       archivedAt: cls.archivedAt ? cls.archivedAt.toISOString() : null,
       mentors: links

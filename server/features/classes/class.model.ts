@@ -16,6 +16,8 @@ export class GuildClass extends Model<InferAttributes<GuildClass>, InferCreation
   declare startsOn: string;
   declare endsOn: string;
   declare capacity: number;
+  /** Bench time the class asks of each apprentice per week; null when it asks for none. */
+  declare requiredMinutesPerWeek: CreationOptional<number | null>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -48,6 +50,7 @@ export function initClassModels(sequelize: Sequelize) {
       startsOn: { type: DataTypes.DATEONLY, allowNull: false },
       endsOn: { type: DataTypes.DATEONLY, allowNull: false },
       capacity: { type: DataTypes.INTEGER, allowNull: false },
+      requiredMinutesPerWeek: { type: DataTypes.INTEGER, allowNull: true },
       archivedAt: { type: DataTypes.DATE, allowNull: true },
       ...stamps,
     },

@@ -93,13 +93,20 @@ export async function createClass(input: ClassCreateInput, actor: UserDTO): Prom
         startsOn: input.startsOn,
         endsOn: input.endsOn,
         capacity: input.capacity,
+        requiredMinutesPerWeek: input.requiredMinutesPerWeek,
       },
       { transaction },
     );
     for (const m of mentors) await ClassMentor.create({ classId: cls.id, userId: m.id }, { transaction });
     const target = { type: 'class', id: cls.id, label: cls.name } as const;
-    const { name, courseId, startsOn, endsOn, capacity } = input;
-    await recordAudit(actor.id, 'class.created', target, { name, courseId, startsOn, endsOn, capacity }, transaction);
+    const { name, courseId, startsOn, endsOn, capacity, requiredMinutesPerWeek } = input;
+    await recordAudit(
+      actor.id,
+      'class.created',
+      target,
+      { name, courseId, startsOn, endsOn, capacity, requiredMinutesPerWeek },
+      transaction,
+    );
     if (mentors.length) {
       await recordAudit(
         actor.id,
@@ -113,7 +120,7 @@ export async function createClass(input: ClassCreateInput, actor: UserDTO): Prom
   });
 }
 
-const EDITABLE = ['name', 'courseId', 'startsOn', 'endsOn', 'capacity'] as const;
+const EDITABLE = ['name', 'courseId', 'startsOn', 'endsOn', 'capacity', 'requiredMinutesPerWeek'] as const;
 
 export async function updateClass(id: number, input: ClassUpdateInput, actor: UserDTO): Promise<ClassDTO> {
   return sequelize().transaction(async (transaction) => {

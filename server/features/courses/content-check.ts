@@ -3,7 +3,7 @@ import path from 'node:path';
 import type { Root } from 'mdast';
 import { visit } from 'unist-util-visit';
 import { checkCalculatorExamples, type EmbeddedCalculator } from './calculator-examples';
-import { loadContent, type ContentProblem } from './content-loader';
+import { loadContent, type ContentProblem, type LoadedCourse } from './content-loader';
 import { parseLessonMarkdown } from './lesson-markdown';
 
 /** Names an image may have: what the image route will serve, and nothing that could climb out of the folder. */
@@ -33,6 +33,7 @@ export function checkContent(root: string, calculatorNames: readonly string[]): 
   for (const course of courses) {
     const images = checkImagesFolder(path.join(course.dir, 'images'), problems);
     const courseFile = path.join(course.dir, 'course.md');
+    checkSkills(course, courseFile, problems);
     checkBody(
       course.intro,
       { file: courseFile, lineOffset: course.introLineOffset, images, calculatorNames },
@@ -51,6 +52,27 @@ export function checkContent(root: string, calculatorNames: readonly string[]): 
   }
   problems.sort((a, b) => a.file.localeCompare(b.file) || a.line - b.line);
   return { problems, courses: courses.length, lessons };
+}
+
+/**
+ * A skill is signed off against the standard it states and the pieces sent for it, so every skill needs a standard
+ * and at least one lesson that teaches it and ends with a project.
+ */
+function checkSkills(course: LoadedCourse, courseFile: string, problems: ContentProblem[]) {
+  for (const skill of course.meta.skills) {
+    if (!skill.standard)
+      problems.push({
+        file: courseFile,
+        line: 1,
+        message: `skill "${skill.key}" has no standard: say in a sentence or two what a mentor must see to sign it off`,
+      });
+    if (!course.lessons.some((l) => l.meta.project && l.meta.skills.includes(skill.key)))
+      problems.push({
+        file: courseFile,
+        line: 1,
+        message: `skill "${skill.key}" is taught by no lesson with a project: a sign-off needs a piece to judge`,
+      });
+  }
 }
 
 /** Checks one body and returns the calculators it embeds, with their lines. */

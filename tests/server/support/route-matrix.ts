@@ -275,4 +275,37 @@ export const ROUTE_MATRIX: Record<string, RouteCase> = {
     body: () => ({ completeness: 3, measurements: 3, photos: 2 }),
     expect: mentorsFeedback(201),
   },
+
+  'GET /api/apprentices/:id/record': { url: (c) => `/api/apprentices/${owner(c)}/record`, expect: ownersWork(200) },
+  'GET /api/apprentices/:id/portfolio.zip': {
+    url: (c) => `/api/apprentices/${owner(c)}/portfolio.zip`,
+    expect: ownersWork(200),
+  },
+  'POST /api/apprentices/:id/sign-offs': {
+    url: async (c) => {
+      await c.noStandingSignOff();
+      return `/api/apprentices/${owner(c)}/sign-offs`;
+    },
+    body: (c) => c.signOffBody(),
+    expect: s(401, 403, 403, 403, 201, 404, 404, 201),
+  },
+  'POST /api/sign-offs/:id/withdraw': {
+    url: async (c) => `/api/sign-offs/${await c.freshSignOff()}/withdraw`,
+    body: () => ({ reason: 'Seen again: the tilt is uneven.' }),
+    expect: s(401, 403, 403, 403, 200, 404, 404, 200),
+  },
+  // The owner has not done the springs course: the guild office is told what is missing.
+  'POST /api/certificates': {
+    url: () => '/api/certificates',
+    body: (c) => ({ apprenticeId: owner(c), courseId: c.springs.course.id }),
+    expect: adminOnly(422),
+  },
+  'GET /api/certificates': { url: (c) => `/api/certificates?apprenticeId=${owner(c)}`, expect: ownersWork(200) },
+  'GET /api/certificates/:id/pdf': { url: (c) => `/api/certificates/${c.certificate.id}/pdf`, expect: ownersWork(200) },
+  'POST /api/certificates/:id/revoke': {
+    url: async (c) => `/api/certificates/${await c.freshCertificate()}/revoke`,
+    body: () => ({ reason: 'Issued to the wrong course.' }),
+    expect: adminOnly(200),
+  },
+  'GET /api/verify/:code': { url: (c) => `/api/verify/${c.certificate.code}`, expect: everyone(200) },
 };

@@ -7,6 +7,8 @@ import { ClassMentor, Enrolment, GuildClass } from '../../../server/features/cla
 import { Invitation } from '../../../server/features/classes/invitation.model';
 import { Course, Lesson, Project } from '../../../server/features/courses/course.model';
 import { Notification } from '../../../server/features/notifications/notification.model';
+import { Certificate, SignOff } from '../../../server/features/record/record.model';
+import { newCertificateCode } from '../../../server/features/record/certificates.service';
 import { Pin, Review } from '../../../server/features/reviews/review.model';
 import { Submission, SubmissionVersion } from '../../../server/features/submissions/submission.model';
 import { newLinkToken } from '../../../server/lib/link-token';
@@ -121,6 +123,14 @@ export async function makeSecurityCast(t: TestApp) {
     link: null,
   });
   const openInvitation = await invitation(office.id);
+  const passedId = await passedPiece(users.owner.id, users.mentor.id, train.projects[2]);
+  const certificate = await Certificate.create({
+    code: newCertificateCode(),
+    apprenticeId: users.owner.id,
+    courseId: train.course.id,
+    issuedById: users.admin.id,
+    issuedAt: new Date(),
+  });
   for (const res of [draft, entry, calculation]) {
     if (res.status !== 201) throw new Error(`cast: ${res.status} ${JSON.stringify(res.body)}`);
   }
@@ -143,6 +153,44 @@ export async function makeSecurityCast(t: TestApp) {
     calculationId: calculation.body.id as number,
     noticeId: notice.id,
     openInvitation,
+    certificate,
+    /** A sign-off of the owner's pivot-holes skill needs this passed piece as evidence. */
+    signOffBody: () => ({
+      courseId: train.course.id,
+      skillKey: 'pivot-holes',
+      note: 'Upright holes, even tilt.',
+      evidence: [{ kind: 'submission', id: passedId }],
+    }),
+    /** No standing sign-off of that skill, so that each signer meets the same state. */
+    async noStandingSignOff() {
+      await SignOff.update(
+        { withdrawnAt: new Date(), withdrawReason: 'matrix' },
+        { where: { apprenticeId: users.owner.id, skillKey: 'pivot-holes', withdrawnAt: null } },
+      );
+    },
+    /** A standing sign-off by the class's mentor, to be withdrawn. */
+    async freshSignOff() {
+      await this.noStandingSignOff();
+      const row = await SignOff.create({
+        apprenticeId: users.owner.id,
+        courseId: train.course.id,
+        skillKey: 'pivot-holes',
+        mentorId: users.mentor.id,
+        note: 'Seen.',
+        evidence: [{ kind: 'submission', id: passedId }],
+      });
+      return row.id;
+    },
+    async freshCertificate() {
+      const row = await Certificate.create({
+        code: newCertificateCode(),
+        apprenticeId: users.owner.id,
+        courseId: train.course.id,
+        issuedById: users.admin.id,
+        issuedAt: new Date(),
+      });
+      return row.id;
+    },
     fresh,
 
     /** The waiting piece, put back to waiting with no review, so that every reviewer meets the same state. */
@@ -197,6 +245,33 @@ export async function makeSecurityCast(t: TestApp) {
       return link.token;
     },
   };
+
+  /** A piece of the owner's, passed by the mentor, written straight into the tables. */
+  async function passedPiece(apprenticeId: number, mentorId: number, project: Project) {
+    const piece = await Submission.create({
+      apprenticeId,
+      projectId: project.id,
+      status: 'passed',
+      sentAt: new Date(),
+    });
+    const version = await SubmissionVersion.create({
+      submissionId: piece.id,
+      number: 1,
+      notes: 'Both holes upright.',
+      sentAt: new Date(),
+      logEntryIds: [],
+      calculationIds: [],
+    });
+    await Review.create({
+      versionId: version.id,
+      mentorId,
+      scores: Object.fromEntries(project.criteria.map((c) => [c.key, 3])),
+      comment: 'Sound.',
+      weightedScore: 3,
+      outcome: 'passed',
+    });
+    return piece.id;
+  }
 
   async function invitation(classId: number) {
     const link = newLinkToken(7 * 24 * 3600_000);

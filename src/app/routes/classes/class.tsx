@@ -1,3 +1,4 @@
+import { formatMinutes } from '@shared/schemas/log-entry';
 import { useState, type ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import type { ClassDTO } from '@shared/schemas/class';
@@ -108,6 +109,18 @@ function Summary({ cls }: { cls: ClassDTO }) {
                 {' '}
                 · <span className="num">{cls.counts.invited}</span> held by open invitations
               </span>
+            )}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-sm text-muted">Bench time asked</dt>
+          <dd>
+            {cls.requiredMinutesPerWeek === null ? (
+              'No set hours'
+            ) : (
+              <>
+                <span className="num font-semibold">{formatMinutes(cls.requiredMinutesPerWeek)}</span> a week
+              </>
             )}
           </dd>
         </div>

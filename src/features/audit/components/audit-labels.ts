@@ -17,6 +17,10 @@ export const ACTION_LABEL: Record<AuditAction, string> = {
   'user.role-changed': 'Changed a role',
   'user.deactivated': 'Deactivated an account',
   'user.reactivated': 'Reactivated an account',
+  'sign-off.recorded': 'Signed off a skill',
+  'sign-off.withdrawn': 'Withdrew a sign-off',
+  'certificate.issued': 'Issued a certificate',
+  'certificate.revoked': 'Revoked a certificate',
 };
 
 const list = (v: unknown) => (Array.isArray(v) ? v.join(', ') : '');

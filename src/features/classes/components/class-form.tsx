@@ -21,6 +21,14 @@ const ClassForm = z
       .number<string>()
       .check(z.int('Whole apprentices only.'), z.gte(1, 'Room for at least 1 apprentice.'), z.lte(500)),
     mentorIds: z.array(z.number()),
+    // Asked in hours, as a workshop says it; stored in minutes.
+    requiredHoursPerWeek: z.string().check(
+      z.trim(),
+      z.refine(
+        (v) => v === '' || (/^\d+(\.\d+)?$/.test(v) && Number(v) > 0 && Number(v) <= 168),
+        'Give the hours a week (for example 12), or leave it empty.',
+      ),
+    ),
   })
   .check(
     z.refine((v) => v.endsOn >= v.startsOn, { path: ['endsOn'], message: 'The class cannot end before it starts.' }),
@@ -51,6 +59,10 @@ export function ClassFormFields({ initial, submitLabel, busy, error, onSubmit, o
         endsOn: initial?.endsOn ?? '',
         capacity: initial ? String(initial.capacity) : '12',
         mentorIds: initial?.mentors.map((m) => m.id) ?? [],
+        requiredHoursPerWeek:
+          initial?.requiredMinutesPerWeek != null
+            ? String(Math.round((initial.requiredMinutesPerWeek / 60) * 100) / 100)
+            : '',
       },
     },
   );
@@ -63,7 +75,15 @@ export function ClassFormFields({ initial, submitLabel, busy, error, onSubmit, o
     <form
       noValidate
       className="space-y-4"
-      onSubmit={handleSubmit((values) => onSubmit(values, (err) => showFieldErrors(err, [...FIELDS], setError)))}
+      onSubmit={handleSubmit(({ requiredHoursPerWeek, ...values }) =>
+        onSubmit(
+          {
+            ...values,
+            requiredMinutesPerWeek: requiredHoursPerWeek === '' ? null : Math.round(Number(requiredHoursPerWeek) * 60),
+          },
+          (err) => showFieldErrors(err, [...FIELDS], setError),
+        ),
+      )}
     >
       <div className="grid gap-4 md:grid-cols-2">
         <TextField
@@ -91,6 +111,14 @@ export function ClassFormFields({ initial, submitLabel, busy, error, onSubmit, o
           hint="Open invitations hold a seat until they are accepted or run out."
           error={errors.capacity?.message}
           {...register('capacity')}
+        />
+        <TextField
+          label="Bench time asked per week (hours)"
+          inputMode="decimal"
+          className="num"
+          hint="Leave empty if the class asks for none. The record shows each apprentice's hours against it."
+          error={errors.requiredHoursPerWeek?.message}
+          {...register('requiredHoursPerWeek')}
         />
       </div>
       <Controller

@@ -63,7 +63,16 @@ export function RosterTable({ classId, roster, canEdit }: { classId: number; ros
                     {e.name || <span className="font-normal text-muted">(name not given yet)</span>}
                   </div>
                   <div className="text-muted">{e.email}</div>
-                  {e.userId && <Link to={paths.apprenticeLog(e.userId)}>Bench log</Link>}
+                  {e.userId && (
+                    <div className="flex gap-4">
+                      <Link to={paths.apprenticeLog(e.userId)}>Bench log</Link>
+                      {e.status === 'active' && (
+                        <Link to={paths.apprenticeRecord(e.userId)} aria-label={`Record of ${e.name}`}>
+                          Record
+                        </Link>
+                      )}
+                    </div>
+                  )}
                 </td>
                 <td className="p-3">
                   <span className={`rounded border px-2 py-0.5 text-xs font-semibold ${STATUS_STYLE[e.status]}`}>

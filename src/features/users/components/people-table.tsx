@@ -1,9 +1,11 @@
+import { Link } from 'react-router-dom';
 import { useState } from 'react';
 import { toast } from 'sonner';
 import { ROLES, type Role, type UserListItem } from '@shared/schemas/user';
 import { Button } from '@/components/ui/button';
 import { ConfirmStep } from '@/components/ui/confirm-step';
 import { ErrorNotice } from '@/components/ui/states';
+import { paths } from '@/config/paths';
 import { ROLE_LABEL } from '@/features/auth/role-labels';
 import { useUpdateUser } from '../api/users';
 
@@ -46,6 +48,11 @@ export function PeopleTable({ users, selfId }: { users: UserListItem[]; selfId: 
                       {self && <span className="font-normal text-muted"> (you)</span>}
                     </div>
                     <div className="text-muted">{u.email}</div>
+                    {u.role === 'apprentice' && (
+                      <Link to={paths.apprenticeRecord(u.id)} aria-label={`Record of ${u.name}`}>
+                        Record
+                      </Link>
+                    )}
                   </td>
                   <td className="p-3">
                     <RoleChoice
