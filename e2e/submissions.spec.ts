@@ -130,6 +130,8 @@ test('a piece goes from the apprentice to the mentor, comes back for rework with
 });
 
 test('the pieces, queue and review pages have no accessibility violations that axe can find', async ({ browser }) => {
+  // Three sign-ins and axe on five pages: more than the default minute on a busy 2-core machine.
+  test.setTimeout(150_000);
   const { default: AxeBuilder } = await import('@axe-core/playwright');
   const check = async (page: Page, url: string, ready: RegExp) => {
     await page.goto(url);
