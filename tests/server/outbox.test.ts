@@ -7,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { openAndMigrate } from '../../server/boot';
 import { loadConfig } from '../../server/config/env';
+import { User } from '../../server/features/auth/user.model';
 import { notify } from '../../server/features/notifications/notifications.service';
 import { OutboxMessage } from '../../server/features/outbox/outbox-message.model';
 import { createOutboxWorker, retryDelayMs } from '../../server/features/outbox/outbox-worker';
@@ -149,7 +150,6 @@ describe('across a restart', () => {
   it('when the server stops with mail still queued, then the next start delivers it without anyone asking again', async () => {
     const first = await openAndMigrate(loadConfig(baseEnv(dataDir)));
     const app = createApp({ sequelize: first.sequelize, config: loadConfig(baseEnv(dataDir)), logger: silentLogger() });
-    const { User } = await import('../../server/features/auth/user.model');
     const user = await User.create({ name: 'Ruth Pellow', email: 'ruth-restart@example.test', role: 'apprentice' });
     expect(
       (await request(app).post('/api/auth/password-reset').set('Origin', ORIGIN).send({ email: user.email })).status,

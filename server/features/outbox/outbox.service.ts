@@ -53,18 +53,19 @@ const toDTO = (m: OutboxMessage): OutboxMessageDTO => ({
 
 /** The guild office's view: newest first, never the message text (it may hold someone's one-time link). */
 export async function listOutbox(query: OutboxQuery): Promise<OutboxReply> {
-  const where = query.state ? { state: query.state } : {};
-  const { rows, count } = await OutboxMessage.findAndCountAll({
-    where,
+  const byState = (await OutboxMessage.count({ group: ['state'] })) as unknown as { state: string; count: number }[];
+  const counts = { queued: 0, sent: 0, failed: 0 };
+  for (const { state, count: n } of byState) if (state in counts) counts[state as keyof typeof counts] = n;
+  // The per-state counts already give the total, so the page itself needs no count of its own.
+  const total = query.state ? counts[query.state] : counts.queued + counts.sent + counts.failed;
+  const rows = await OutboxMessage.findAll({
+    where: query.state ? { state: query.state } : {},
     attributes: { exclude: ['text'] },
     order: [['id', 'DESC']],
     limit: OUTBOX_PAGE_SIZE,
     offset: (query.page - 1) * OUTBOX_PAGE_SIZE,
   });
-  const byState = (await OutboxMessage.count({ group: ['state'] })) as unknown as { state: string; count: number }[];
-  const counts = { queued: 0, sent: 0, failed: 0 };
-  for (const { state, count: n } of byState) if (state in counts) counts[state as keyof typeof counts] = n;
-  return { messages: rows.map(toDTO), total: count, page: query.page, pageSize: OUTBOX_PAGE_SIZE, counts };
+  return { messages: rows.map(toDTO), total, page: query.page, pageSize: OUTBOX_PAGE_SIZE, counts };
 }
 
 /** Sends a message that the outbox gave up on again, from scratch: a fresh day of retries. */
